@@ -1,0 +1,89 @@
+using Readiness.Core.Checklists;
+using Readiness.Core.Configuration;
+using Readiness.Core.Projects;
+using Readiness.Core.Registry;
+using Readiness.Core.Reports;
+using Readiness.Core.Snapshots;
+
+namespace Readiness.Core.Engine;
+
+/// <summary>
+/// The one path every front end takes: snapshot → configuration → checklist → project model → release facts →
+/// registry facts → engine → report. Built once; thread-safe.
+/// </summary>
+public sealed class ReadinessRunner(
+    ISnapshotSource snapshots,
+    IProjectModelReader projectReader,
+    IChecklistSource checklists,
+    ChecklistEngine engine,
+    TimeProvider time)
+{
+    public const string DefaultChecklist = "library";
+
+    public ChecklistParser Parser { get; } = new(Checks.CheckIds.All);
+
+    public ChecklistResolver Resolver => new(checklists, Parser, engine.Catalog.DefaultSeverities);
+
+    /// <summary>Runs one inspection. Throws <see cref="RepositoryInspectionException"/> (exit 3) and
+    /// <see cref="ConfigurationException"/> (exit 2) for what the user must fix first.</summary>
+    public async Task<Report> RunAsync(RunRequest request, IPackageRegistry? registry, TimeSpan registryTimeout, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        using var snapshot = snapshots.Open(request.Snapshot);
+        var config = request.Config ?? ReadConfig(snapshot.Files);
+        var resolver = Resolver;
+        var definition = request.Checklist
+            ?? resolver.Load(request.ChecklistName ?? config.Checklist ?? DefaultChecklist,
+                config.Checklist is not null && request.ChecklistName is null ? config.Values["checklist"].Mark : null);
+        var checklist = resolver.Resolve(definition, config);
+        var model = projectReader.Read(snapshot.Files);
+        var now = time.GetUtcNow();
+        var release = ReleaseFactsBuilder.Build(snapshot, model, config, request.Version, now);
+
+        RegistryFacts? registryFacts = null;
+        if (checklist.Checks.Any(c => c.Id.StartsWith("registry.", StringComparison.Ordinal)))
+        {
+            registryFacts = registry is null
+                ? RegistryFacts.Offline("offline: registry checks were not asked to reach a registry")
+                : await RegistryPhase.GatherAsync(registry, RegistryIds(model), registryTimeout, cancellationToken).ConfigureAwait(false);
+        }
+
+        var notes = new List<string>();
+        notes.AddRange(checklist.Checks.Where(c => engine.Catalog.Find(c.Id) is null)
+            .Select(c => $"{c.Id} is in the checklist but this version of the tool does not implement it yet; it did not run."));
+        notes.AddRange(model.Problems.Select(p => p.Line is { } line ? $"{p.Path}:{line}: {p.Message}" : $"{p.Path}: {p.Message}"));
+        notes.Add($"Version {release.Version ?? "(unknown)"} taken from {release.VersionSource}.");
+        var input = new EngineInput(
+            snapshot,
+            model,
+            checklist,
+            config,
+            release,
+            registryFacts,
+            (request.Confirmed ?? []).ToHashSet(StringComparer.Ordinal),
+            notes);
+        return engine.Run(input);
+    }
+
+    /// <summary>Reads <c>.readiness.yml</c> from the candidate's files; no file means defaults.</summary>
+    public RepositoryConfig ReadConfig(IFileTree files)
+    {
+        ArgumentNullException.ThrowIfNull(files);
+        var text = files.ReadText(RepositoryConfig.FileName, YamlReader.MaxChars);
+        return text is null ? RepositoryConfig.Empty : new RepositoryConfigParser(Parser).Parse(RepositoryConfig.FileName, text);
+    }
+
+    /// <summary>The packable projects' ids and every package they depend on.</summary>
+    public static IEnumerable<string> RegistryIds(ProjectModel model)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        foreach (var project in model.Packable)
+        {
+            yield return project.PackageId;
+            foreach (var reference in project.PackageReferences)
+            {
+                yield return reference.Id;
+            }
+        }
+    }
+}
