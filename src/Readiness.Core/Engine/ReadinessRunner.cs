@@ -44,9 +44,20 @@ public sealed class ReadinessRunner(
         if (checklist.Checks.Any(c => c.Id.StartsWith("registry.", StringComparison.Ordinal)))
         {
             var registry = registries?.Invoke(config);
-            registryFacts = registry is null
-                ? RegistryFacts.Offline("offline: no registry was asked (--offline, or none configured)")
-                : await RegistryPhase.GatherAsync(registry, RegistryIds(model), request.RegistryTimeout ?? RegistryPhase.DefaultTimeout, cancellationToken).ConfigureAwait(false);
+            try
+            {
+                registryFacts = registry is null
+                    ? RegistryFacts.Offline("offline: no registry was asked (--offline, or none configured)")
+                    : await RegistryPhase.GatherAsync(
+                        registry,
+                        RegistryIds(model),
+                        RegistryPhase.TimeoutFrom(config, request.RegistryTimeout ?? RegistryPhase.DefaultTimeout),
+                        cancellationToken).ConfigureAwait(false);
+            }
+            finally
+            {
+                (registry as IDisposable)?.Dispose();
+            }
         }
 
         var notes = new List<string>();
