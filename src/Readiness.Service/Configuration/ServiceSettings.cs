@@ -76,7 +76,7 @@ public sealed class ServiceSettings
     {
         ArgumentNullException.ThrowIfNull(configuration);
         var c = configuration.GetSection(Section);
-        string Key(string name) => $"{Section}:{name}";
+        static string Key(string name) => $"{Section}:{name}";
 
         var apiUrlText = c["Forge:ApiUrl"];
         var apiUrl = DefaultForgeApiUrl;

@@ -29,7 +29,7 @@ public sealed class PullRequestJobProcessor(
     RunStore runs,
     SecretRedactor redactor,
     ILogger<PullRequestJobProcessor> logger,
-    IPackageRegistry? registry = null)
+    RegistrySelector? registries = null)
 {
     /// <summary>The hidden first line of the report comment, by which it is found again.</summary>
     public const string CommentMarker = "<!-- readiness-report -->";
@@ -39,8 +39,6 @@ public sealed class PullRequestJobProcessor(
 
     /// <summary>Comments longer than this are cut (the forge refuses bodies over 65,536 characters; observed API limit, from memory).</summary>
     public const int MaxCommentChars = 60_000;
-
-    public static readonly TimeSpan RegistryTimeout = TimeSpan.FromSeconds(20);
 
     public async Task<JobOutcome> ProcessAsync(Job job, CancellationToken cancellationToken)
     {
@@ -70,8 +68,7 @@ public sealed class PullRequestJobProcessor(
             logger.LogInformation("Reporting on {PullRequest} at {Sha}: {Reason}", pullRequest, request.HeadSha, reason);
             var report = await runner.RunAsync(
                 new RunRequest(new SnapshotRequest(mirror, request.HeadSha), Confirmed: TaskListConfirmations.Parse(request.Body), Config: baseConfig),
-                registry,
-                RegistryTimeout,
+                registries,
                 cancellationToken).ConfigureAwait(false);
             report = report with { Subject = report.Subject with { Repository = request.Repository, Ref = $"pull/{request.Number}" } };
             run = ReportRun(job, report);
