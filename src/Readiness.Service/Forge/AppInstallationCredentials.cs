@@ -61,7 +61,7 @@ public sealed class AppInstallationCredentials : IForgeCredentials, IDisposable
             var client = connections.Client(new Credentials(jwt, AuthenticationType.Bearer));
             var issued = await retry.RunAsync(
                 $"installation token for {id}",
-                _ => client.GitHubApps.CreateInstallationToken(id),
+                ct => client.GitHubApps.CreateInstallationToken(id).WaitAsync(ct),
                 cancellationToken).ConfigureAwait(false);
             redactor.Add(issued.Token);
             cache[id] = (issued.Token, issued.ExpiresAt);
