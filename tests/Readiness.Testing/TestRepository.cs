@@ -177,7 +177,14 @@ public sealed class TestRepository : IDisposable
         {
             var path = target.Combine(bare ? "clone.git" : "clone");
             var source = new Uri(Path.EndsWith(System.IO.Path.DirectorySeparatorChar) ? Path : Path + System.IO.Path.DirectorySeparatorChar).AbsoluteUri;
-            GitCli.Run(target.Path, ["-c", "uploadpack.allowFilter=true", "clone", "-q", .. options, source, path]);
+            if (options.Any(o => o.StartsWith("--filter", StringComparison.Ordinal)))
+            {
+                // The serving side must allow filters; git drops -c settings when it starts the local upload-pack,
+                // so the setting goes into this repository's own configuration.
+                Git("config", "uploadpack.allowFilter", "true");
+            }
+
+            GitCli.Run(target.Path, ["clone", "-q", .. options, source, path]);
             return new TestRepository(target, path, bare);
         }
         catch
