@@ -26,23 +26,9 @@ public sealed class ReadinessRunner(
 
     /// <summary>Runs one inspection. Throws <see cref="RepositoryInspectionException"/> (exit 3) and
     /// <see cref="ConfigurationException"/> (exit 2) for what the user must fix first.</summary>
-    public Task<Report> RunAsync(RunRequest request, IPackageRegistry? registry, TimeSpan registryTimeout, CancellationToken cancellationToken) =>
-        RunAsync(request, _ => registry, registryTimeout, cancellationToken, disposeRegistry: false);
-
-    /// <summary>
-    /// Runs one inspection, choosing the registry once the repository configuration is known (so <c>publish-to</c>
-    /// can name the feed). <paramref name="registryFor"/> returns null for offline; the runner disposes what it returns.
-    /// A <c>registry-timeout</c> in the configuration replaces <paramref name="registryTimeout"/>, within bounds.
-    /// </summary>
-    public Task<Report> RunAsync(
-        RunRequest request, Func<RepositoryConfig, IPackageRegistry?> registryFor, TimeSpan registryTimeout, CancellationToken cancellationToken) =>
-        RunAsync(request, registryFor, registryTimeout, cancellationToken, disposeRegistry: true);
-
-    private async Task<Report> RunAsync(
-        RunRequest request, Func<RepositoryConfig, IPackageRegistry?> registryFor, TimeSpan registryTimeout, CancellationToken cancellationToken, bool disposeRegistry)
+    public async Task<Report> RunAsync(RunRequest request, RegistrySelector? registries, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(registryFor);
         using var snapshot = snapshots.Open(request.Snapshot);
         var config = request.Config ?? ReadConfig(snapshot.Files);
         var resolver = Resolver;
@@ -57,19 +43,20 @@ public sealed class ReadinessRunner(
         RegistryFacts? registryFacts = null;
         if (checklist.Checks.Any(c => c.Id.StartsWith("registry.", StringComparison.Ordinal)))
         {
-            var registry = registryFor(config);
+            var registry = registries?.Invoke(config);
             try
             {
                 registryFacts = registry is null
-                    ? RegistryFacts.Offline("offline: registry checks were not asked to reach a registry")
-                    : await RegistryPhase.GatherAsync(registry, RegistryIds(model), RegistryPhase.TimeoutFrom(config, registryTimeout), cancellationToken).ConfigureAwait(false);
+                    ? RegistryFacts.Offline("offline: no registry was asked (--offline, or none configured)")
+                    : await RegistryPhase.GatherAsync(
+                        registry,
+                        RegistryIds(model),
+                        RegistryPhase.TimeoutFrom(config, request.RegistryTimeout ?? RegistryPhase.DefaultTimeout),
+                        cancellationToken).ConfigureAwait(false);
             }
             finally
             {
-                if (disposeRegistry)
-                {
-                    (registry as IDisposable)?.Dispose();
-                }
+                (registry as IDisposable)?.Dispose();
             }
         }
 
