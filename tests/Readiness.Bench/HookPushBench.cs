@@ -8,6 +8,7 @@ namespace Readiness.Bench;
 /// Time of <c>git push</c> of an ordinary branch to a local bare remote with and without the hook (interleaved, median
 /// of many runs), and of a release-tag push of the demo repository (offline registry).
 /// </summary>
+[System.Runtime.Versioning.UnsupportedOSPlatform("windows")]
 public sealed class HookPushBench : IBench
 {
     public string Name => "hook-push";

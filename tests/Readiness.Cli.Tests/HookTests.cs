@@ -2,7 +2,8 @@ using Readiness.Testing;
 
 namespace Readiness.Cli.Tests;
 
-/// <summary>The pre-push hook with real git pushing to real bare repositories on disk.</summary>
+/// <summary>The pre-push hook with real git pushing to real bare repositories on disk (POSIX sh hooks).</summary>
+[System.Runtime.Versioning.UnsupportedOSPlatform("windows")]
 public sealed class HookTests : IDisposable
 {
     private readonly TestRepository repo = SampleLibrary.ReadyRelease("1.2.0");
