@@ -1,4 +1,5 @@
 using System.Text;
+
 using Readiness.Core.Snapshots;
 
 namespace Readiness.Testing;

@@ -26,7 +26,7 @@ public sealed class ReadinessRunner(
 
     /// <summary>Runs one inspection. Throws <see cref="RepositoryInspectionException"/> (exit 3) and
     /// <see cref="ConfigurationException"/> (exit 2) for what the user must fix first.</summary>
-    public async Task<Report> RunAsync(RunRequest request, IPackageRegistry? registry, TimeSpan registryTimeout, CancellationToken cancellationToken)
+    public async Task<Report> RunAsync(RunRequest request, RegistrySelector? registries, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(request);
         using var snapshot = snapshots.Open(request.Snapshot);
@@ -43,9 +43,21 @@ public sealed class ReadinessRunner(
         RegistryFacts? registryFacts = null;
         if (checklist.Checks.Any(c => c.Id.StartsWith("registry.", StringComparison.Ordinal)))
         {
-            registryFacts = registry is null
-                ? RegistryFacts.Offline("offline: registry checks were not asked to reach a registry")
-                : await RegistryPhase.GatherAsync(registry, RegistryIds(model), registryTimeout, cancellationToken).ConfigureAwait(false);
+            var registry = registries?.Invoke(config);
+            try
+            {
+                registryFacts = registry is null
+                    ? RegistryFacts.Offline("offline: no registry was asked (--offline, or none configured)")
+                    : await RegistryPhase.GatherAsync(
+                        registry,
+                        RegistryIds(model),
+                        RegistryPhase.TimeoutFrom(config, request.RegistryTimeout ?? RegistryPhase.DefaultTimeout),
+                        cancellationToken).ConfigureAwait(false);
+            }
+            finally
+            {
+                (registry as IDisposable)?.Dispose();
+            }
         }
 
         var notes = new List<string>();

@@ -12,10 +12,12 @@ namespace Readiness.Core.Engine;
 /// <param name="Confirmed">Manual items a person confirmed.</param>
 /// <param name="Config">The repository configuration to apply instead of the one at the inspected commit
 /// (the service passes the base branch's, so a pull request cannot loosen its own rules).</param>
+/// <param name="RegistryTimeout">The bound on the whole registry phase (default 10 s).</param>
 public sealed record RunRequest(
     SnapshotRequest Snapshot,
     string? ChecklistName = null,
     ChecklistDefinition? Checklist = null,
     string? Version = null,
     IReadOnlyList<string>? Confirmed = null,
-    RepositoryConfig? Config = null);
+    RepositoryConfig? Config = null,
+    TimeSpan? RegistryTimeout = null);

@@ -6,12 +6,14 @@ namespace Readiness.Core.Registry;
 /// <param name="RegistryId">The id as the registry spells it, when it says.</param>
 /// <param name="Versions">Published versions (listed and unlisted).</param>
 /// <param name="Problem">Why the answer is unavailable (timeout, 500, malformed); then the other fields mean nothing.</param>
+/// <param name="Owners">The registry accounts that own the id, when the feed says (its search service); null when unknown.</param>
 public sealed record PackageLookup(
     string Id,
     bool Exists,
     string? RegistryId,
     IReadOnlyList<PublishedVersion> Versions,
-    string? Problem = null)
+    string? Problem = null,
+    IReadOnlyList<string>? Owners = null)
 {
     public bool Available => Problem is null;
 
