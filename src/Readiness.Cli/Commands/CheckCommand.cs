@@ -11,8 +11,6 @@ namespace Readiness.Cli.Commands;
 /// <summary><c>readiness check [PATH]</c>: inspect one release candidate and report.</summary>
 public sealed class CheckCommand(Composition composition, CliConsole console)
 {
-    public const string PublicFeed = "https://api.nuget.org/v3/index.json";
-
     private readonly CheckOptions options = new();
 
     public Command Build()
@@ -76,7 +74,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         var registryOptions = new RegistryOptions { Timeout = timeout, NoCache = noCache };
         return config =>
         {
-            var source = explicitSource ?? config.Get("publish-to") ?? PublicFeed;
+            var source = RegistryFactory.ChooseSource(explicitSource, config);
             var local = source.Contains("://", StringComparison.Ordinal) ? source : console.FullPath(source);
             return RegistryFactory.Create(local, registryOptions);
         };

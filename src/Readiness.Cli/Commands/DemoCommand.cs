@@ -32,10 +32,15 @@ public sealed class DemoCommand(Composition composition, CliConsole console, Che
         var repository = Path.Combine(folder, "bramble-sketches");
         var tag = DemoRepository.Create(repository);
         await console.Out.WriteLineAsync($"Demo repository (invented): {repository}, release tag {tag}").ConfigureAwait(false);
+
+        var feed = Path.Combine(folder, "feed");
+        DemoFeed.Create(feed);
+        await console.Out.WriteLineAsync($"Demo package feed (local folder, invented packages): {feed}").ConfigureAwait(false);
         await console.Out.WriteLineAsync().ConfigureAwait(false);
 
         var request = new RunRequest(new SnapshotRequest(repository, tag, tag));
-        var report = await composition.Runner.RunAsync(request, null, cancellationToken).ConfigureAwait(false);
+        var registries = check.RegistriesFor(feed, TimeSpan.FromSeconds(5), noCache: true);
+        var report = await composition.Runner.RunAsync(request, registries, cancellationToken).ConfigureAwait(false);
         await check.WriteReportAsync(report, "text", null, cancellationToken).ConfigureAwait(false);
 
         var html = Path.Combine(folder, "readiness-report.html");
@@ -46,7 +51,7 @@ public sealed class DemoCommand(Composition composition, CliConsole console, Che
 
         await console.Out.WriteLineAsync().ConfigureAwait(false);
         await console.Out.WriteLineAsync($"HTML report: {html}").ConfigureAwait(false);
-        await console.Out.WriteLineAsync($"Try: readiness check {repository} --format json   (or --worktree after fixing files)").ConfigureAwait(false);
+        await console.Out.WriteLineAsync($"Try: readiness check {repository} --registry {feed} --format json   (or --worktree after fixing files)").ConfigureAwait(false);
         return ExitCodes.Ready;
     }
 }
