@@ -378,7 +378,8 @@ internal sealed class ItemEvaluator(
             notes.Add($"{item.Location}: ProjectReference {item.Spec} points outside the repository");
         }
 
-        return new ProjectReferenceItem(path ?? item.Spec.Replace('\\', '/'), Plain(item.Metadata), item.Location);
+        path ??= VirtualPaths.NormalizeClimbing(projectFolder.Length == 0 ? item.Spec : projectFolder + "/" + item.Spec);
+        return new ProjectReferenceItem(path, Plain(item.Metadata), item.Location);
     }
 
     private static Dictionary<string, string> Plain(Dictionary<string, MetadataValue> metadata)

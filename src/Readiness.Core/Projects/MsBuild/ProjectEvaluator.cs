@@ -254,6 +254,7 @@ internal sealed class ProjectEvaluator
             }
             else if (string.Equals(project, "Sdk.targets", StringComparison.OrdinalIgnoreCase))
             {
+                NoteUnknownSdk(name, at);
                 SdkTargets(at);
             }
             else
@@ -344,14 +345,8 @@ internal sealed class ProjectEvaluator
 
     private void SdkProps(string name, SourceLocation at)
     {
-        if (SdkModel.IsDotNet(name))
-        {
-            dotNetSdk = true;
-        }
-        else
-        {
-            notes.Add($"{at}: MSBuild SDK {name} is not read; properties and items it sets are unknown");
-        }
+        dotNetSdk |= SdkModel.IsDotNet(name);
+        NoteUnknownSdk(name, at);
 
         if (propsDone)
         {
@@ -373,6 +368,14 @@ internal sealed class ProjectEvaluator
         {
             ImportFile(packagesProps, at, 0);
             Sdk("CentralPackageVersionsFileImported", "true", at, [], "set by NuGet.props when it imports Directory.Packages.props");
+        }
+    }
+
+    private void NoteUnknownSdk(string name, SourceLocation at)
+    {
+        if (!SdkModel.IsDotNet(name))
+        {
+            notes.Add($"{at}: MSBuild SDK {name} is not read; properties and items it sets are unknown");
         }
     }
 
