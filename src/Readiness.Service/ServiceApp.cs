@@ -4,6 +4,7 @@ using Readiness.Core.Engine;
 using Readiness.Core.Forge;
 using Readiness.Core.Projects;
 using Readiness.Core.Snapshots;
+using Readiness.Git;
 using Readiness.Service.Api;
 using Readiness.Service.Configuration;
 using Readiness.Service.Forge;
@@ -78,6 +79,7 @@ public static class ServiceApp
                 ? new ChecklistSources([new FolderChecklists(folder), builtIn])
                 : builtIn;
         });
+        services.AddSingleton<ISnapshotSource, GitSnapshotSource>();
         services.AddSingleton(sp => new ChecklistEngine(CheckCatalog.BuiltIn(), sp.GetRequiredService<TimeProvider>()));
         services.AddSingleton<ReadinessRunner>();
         services.AddSingleton<ReleaseCandidateTriage>();
