@@ -67,6 +67,7 @@ public sealed class ServiceBench : IBench
                 ["Readiness:Forge:Token"] = Token,
                 ["Readiness:Forge:WebhookSecret"] = Secret,
                 ["Readiness:DataFolder"] = data.Path,
+                ["Readiness:Registry"] = "offline",
                 ["Readiness:Worker:PollMilliseconds"] = "200",
             });
         });

@@ -31,6 +31,7 @@ public sealed class ServiceHost : WebApplicationFactory<Program>
             ["Readiness:Forge:MaxRetryDelayMilliseconds"] = "20",
             ["Readiness:ApiToken"] = ApiToken,
             ["Readiness:DataFolder"] = dataFolder,
+            ["Readiness:Registry"] = "offline",
             ["Readiness:ReleaseBranches:0"] = "release/*",
             ["Readiness:Worker:PollMilliseconds"] = "100",
             ["Readiness:Worker:LeaseSeconds"] = "3",
