@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Text;
 using System.Text.Json;
 
 using Readiness.Core.Reports;
@@ -22,14 +23,20 @@ public static class JsonReportReader
     public static Report Read(TextReader reader)
     {
         ArgumentNullException.ThrowIfNull(reader);
-        var buffer = new char[MaxChars + 1];
-        var length = reader.ReadBlock(buffer, 0, buffer.Length);
-        if (length > MaxChars)
+        var text = new StringBuilder();
+        var buffer = new char[64 * 1024];
+        int read;
+        while ((read = reader.Read(buffer, 0, buffer.Length)) > 0)
         {
-            throw new ReportFormatException($"The report is larger than {MaxChars} characters.");
+            if (text.Length + read > MaxChars)
+            {
+                throw new ReportFormatException($"The report is larger than {MaxChars} characters.");
+            }
+
+            text.Append(buffer, 0, read);
         }
 
-        return Parse(new string(buffer, 0, length));
+        return Parse(text.ToString());
     }
 
     public static Report Parse(string json)
@@ -76,7 +83,7 @@ public static class JsonReportReader
         }
 
         var generatedAt = DateTimeOffset.MinValue;
-        if (Optional(root, N.GeneratedAt, "$") is { } at)
+        if (Optional(root, N.GeneratedAt) is { } at)
         {
             if (at.ValueKind != JsonValueKind.String || !at.TryGetDateTimeOffset(out generatedAt))
             {
@@ -85,7 +92,7 @@ public static class JsonReportReader
         }
 
         var notes = new List<string>();
-        if (Optional(root, N.Notes, "$") is { } notesElement)
+        if (Optional(root, N.Notes) is { } notesElement)
         {
             RequireKind(notesElement, JsonValueKind.Array, $"$.{N.Notes}");
             index = 0;
@@ -149,7 +156,7 @@ public static class JsonReportReader
             var itemAt = $"{at}.{N.Evidence}[{index++}]";
             RequireKind(item, JsonValueKind.Object, itemAt);
             int? line = null;
-            if (Optional(item, N.Line, itemAt) is { ValueKind: not JsonValueKind.Null } lineElement)
+            if (Optional(item, N.Line) is { ValueKind: not JsonValueKind.Null } lineElement)
             {
                 line = lineElement.ValueKind == JsonValueKind.Number && lineElement.TryGetInt32(out var value)
                     ? value
@@ -173,7 +180,7 @@ public static class JsonReportReader
             new StandardReference(RequiredString(standard, N.Name, standardAt), RequiredString(standard, N.Url, standardAt)));
     }
 
-    private static JsonElement? Optional(JsonElement parent, string name, string at) =>
+    private static JsonElement? Optional(JsonElement parent, string name) =>
         parent.TryGetProperty(name, out var value) ? value : null;
 
     private static JsonElement Required(JsonElement parent, string name, JsonValueKind kind, string at)
@@ -192,7 +199,7 @@ public static class JsonReportReader
 
     private static string? NullableString(JsonElement parent, string name, string at)
     {
-        var value = Optional(parent, name, at);
+        var value = Optional(parent, name);
         if (value is null || value.Value.ValueKind == JsonValueKind.Null)
         {
             return null;

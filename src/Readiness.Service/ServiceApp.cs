@@ -3,7 +3,10 @@ using Readiness.Core.Checklists;
 using Readiness.Core.Engine;
 using Readiness.Core.Forge;
 using Readiness.Core.Projects;
+using Readiness.Core.Projects.MsBuild;
 using Readiness.Core.Snapshots;
+using Readiness.Git;
+using Readiness.Rendering;
 using Readiness.Service.Api;
 using Readiness.Service.Configuration;
 using Readiness.Service.Forge;
@@ -78,9 +81,12 @@ public static class ServiceApp
                 ? new ChecklistSources([new FolderChecklists(folder), builtIn])
                 : builtIn;
         });
+        services.AddSingleton<ISnapshotSource, GitSnapshotSource>();
+        services.AddSingleton<IProjectModelReader, StaticProjectReader>();
         services.AddSingleton(sp => new ChecklistEngine(CheckCatalog.BuiltIn(), sp.GetRequiredService<TimeProvider>()));
         services.AddSingleton<ReadinessRunner>();
         services.AddSingleton<ReleaseCandidateTriage>();
+        services.AddSingleton(_ => new ReportDocuments([new MarkdownRenderer(), new JsonRenderer(), new HtmlRenderer()], JsonReportReader.Parse));
         services.AddSingleton<PullRequestJobProcessor>();
         services.AddHostedService<JobWorker>();
 

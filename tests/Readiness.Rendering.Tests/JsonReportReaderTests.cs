@@ -131,6 +131,15 @@ public sealed class JsonReportReaderTests
         Assert.Throws<ReportFormatException>(() => JsonReportReader.Parse(json));
     }
 
+    [Fact]
+    public void OversizedInput_IsRefusedBeforeParsing()
+    {
+        var huge = new string(' ', JsonReportReader.MaxChars + 1);
+
+        Assert.Throws<ReportFormatException>(() => JsonReportReader.Read(new StringReader(huge)));
+        Assert.Throws<ReportFormatException>(() => JsonReportReader.Parse(huge));
+    }
+
     private static string ReplaceFirst(string text, string find, string replace)
     {
         var i = text.IndexOf(find, StringComparison.Ordinal);

@@ -28,9 +28,10 @@ public sealed class PullRequestJobProcessor(
     JobStore jobs,
     RunStore runs,
     SecretRedactor redactor,
-    ILogger<PullRequestJobProcessor> logger,
-    RegistrySelector? registries = null)
+    ILogger<PullRequestJobProcessor> logger)
 {
+    private readonly RegistrySelector? registries = ServiceRegistries.Selector(settings);
+
     /// <summary>The hidden first line of the report comment, by which it is found again.</summary>
     public const string CommentMarker = "<!-- readiness-report -->";
 

@@ -1,6 +1,8 @@
 using System.Text;
 using Readiness.Service.Webhooks;
 
+using Readiness.Testing;
+
 namespace Readiness.Service.Tests.Webhooks;
 
 public sealed class PullRequestEventTests
@@ -9,7 +11,7 @@ public sealed class PullRequestEventTests
     public void DocumentedFields_AreRead()
     {
         // Field names from the forge's pull_request webhook payload reference (standards.md §8).
-        var json = Payloads.PullRequest("synchronize", 7, "bramblecote/sketches", "file:///tmp/x.git", new string('a', 40), "release/2.4", ["release", "docs"], "- [x] Soak \\(manual.soak\\)", 42);
+        var json = WebhookPayloads.PullRequest("synchronize", 7, "bramblecote/sketches", "file:///tmp/x.git", new string('a', 40), "release/2.4", ["release", "docs"], "- [x] Soak \\(manual.soak\\)", 42);
         var e = PullRequestEvent.Parse(Encoding.UTF8.GetBytes(json), out var problem);
         Assert.Null(problem);
         Assert.NotNull(e);

@@ -1,9 +1,9 @@
 using System.Text.Json.Nodes;
 
-namespace Readiness.Service.Tests;
+namespace Readiness.Testing;
 
 /// <summary>Webhook payloads shaped like the forge's (only the documented fields the service reads, plus a few more).</summary>
-public static class Payloads
+public static class WebhookPayloads
 {
     public static string PullRequest(
         string action, int number, string fullName, string cloneUrl, string headSha, string baseRef,

@@ -1,0 +1,17 @@
+using Readiness.Core.Snapshots;
+
+namespace Readiness.Core.Projects.MsBuild;
+
+/// <summary>What one <see cref="StaticProjectReader.Read"/> shares between projects: parsed files and the file set.</summary>
+internal sealed class ReadSession(IFileTree tree)
+{
+    private readonly Dictionary<string, ProjectProblem> importProblems = new(StringComparer.Ordinal);
+
+    public FileSet Files { get; } = new(tree);
+
+    public ProjectXmlCache Xml { get; } = new(tree);
+
+    public IEnumerable<ProjectProblem> ImportProblems => importProblems.Values;
+
+    public void ReportImportProblem(ProjectProblem problem) => importProblems.TryAdd(problem.Path, problem);
+}
