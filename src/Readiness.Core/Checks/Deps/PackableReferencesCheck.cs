@@ -1,0 +1,88 @@
+using Readiness.Core.Dependencies;
+using Readiness.Core.Projects;
+using Readiness.Core.Reports;
+
+namespace Readiness.Core.Checks.Deps;
+
+/// <summary>
+/// Every <c>ProjectReference</c> of a packable project becomes a package dependency when packed; it must point to a
+/// project that is itself packed and published, or be private.
+/// </summary>
+public sealed class PackableReferencesCheck : ICheck
+{
+    public CheckDescriptor Descriptor { get; } = new(
+        CheckIds.DepsPackableReferences,
+        "Project references point to packable projects",
+        Severity.Block,
+        Standards.NuGetPack,
+        "dotnet pack turns each ProjectReference into a dependency on a package of that project's id and version. "
+        + "If that project is never packed, the dependency names a package nobody publishes and the install fails.",
+        "Make the referenced project packable (remove IsPackable=false) and release it too, or add "
+        + "PrivateAssets=\"all\" to the ProjectReference and ship its assembly inside this package.");
+
+    public IEnumerable<Finding> Run(CheckContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var any = false;
+        foreach (var project in context.Projects.Packable.Where(p => p.ProjectReferences.Count > 0))
+        {
+            any = true;
+            yield return Judge(project, context.Projects);
+        }
+
+        if (!any)
+        {
+            yield return Finding.Skip("No packable project has a ProjectReference.");
+        }
+    }
+
+    private Finding Judge(ProjectInfo project, ProjectModel model)
+    {
+        var problems = new List<string>();
+        var evidence = new List<Evidence>();
+        var fine = new List<string>();
+        foreach (var reference in project.ProjectReferences)
+        {
+            var at = new Evidence(reference.Location.Path, reference.Location.Line);
+            if (ReferenceAssets.From(reference.Metadata).IsOmitted)
+            {
+                fine.Add($"{reference.Path} (private)");
+                continue;
+            }
+
+            var target = model.Find(reference.Path);
+            if (target is null)
+            {
+                problems.Add($"{reference.Path} ({reference.Location}) is not an SDK-style project at this commit");
+                evidence.Add(at);
+            }
+            else if (!target.IsPackable)
+            {
+                evidence.Add(at);
+                var why = target.IsTestProject ? "a test project" : "not packable";
+                if (target.Property("IsPackable") is { } p && !target.IsTestProject)
+                {
+                    why = $"not packable (IsPackable={p.Value} at {p.Location})";
+                    evidence.Add(new Evidence(p.Location.Path, p.Location.Line));
+                }
+
+                problems.Add($"{target.PackageId} ({reference.Location}) is {why}");
+            }
+            else
+            {
+                fine.Add(target.PackageId);
+            }
+        }
+
+        return problems.Count > 0
+            ? Finding.Fail(
+                "The package would depend on packages nobody publishes: " + string.Join("; ", problems) + ".",
+                Descriptor.Fix,
+                project.PackageId,
+                evidence.ToArray())
+            : Finding.Pass(
+                "Every project reference is packable or private: " + string.Join(", ", fine) + ".",
+                project.PackageId,
+                project.ProjectReferences.Select(r => new Evidence(r.Location.Path, r.Location.Line)).ToArray());
+    }
+}
