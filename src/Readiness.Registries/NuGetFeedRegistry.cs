@@ -74,7 +74,15 @@ public sealed class NuGetFeedRegistry : IPackageRegistry, IDisposable
             hasCredentials = true;
         }
 
-        http = new HttpClient(handler) { Timeout = options.Timeout, MaxResponseContentBufferSize = MaxResponseBytes };
+        // HTTP/2 where the feed offers it (TLS with ALPN): the parallel lookups then share one connection instead of
+        // opening one each; plain HTTP and HTTP/1.1-only feeds are asked over HTTP/1.1.
+        http = new HttpClient(handler)
+        {
+            Timeout = options.Timeout,
+            MaxResponseContentBufferSize = MaxResponseBytes,
+            DefaultRequestVersion = HttpVersion.Version20,
+            DefaultVersionPolicy = HttpVersionPolicy.RequestVersionOrLower,
+        };
         http.DefaultRequestHeaders.UserAgent.ParseAdd("Readiness/0.1");
     }
 
