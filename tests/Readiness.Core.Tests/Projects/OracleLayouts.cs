@@ -247,9 +247,12 @@ internal static class OracleLayouts
                 <PackageLicenseExpression Condition="10 &gt; 9 and '1.2' &lt; '1.10.0'">MIT</PackageLicenseExpression>
                 <PackageLicenseExpression Condition="'$(Flavor)' == 'STUDIO' and 'on' == 'true' and '1.0' == '1.00'">Apache-2.0</PackageLicenseExpression>
                 <IsPackable Condition="!true or '0x10' != '16' or $(Flavor) == Home">false</IsPackable>
+                <Painter Condition="'$(Flavor)' == 'Home' and $([System.IO.File]::ReadAllText('/missing/file'))">never</Painter>
+                <Gallery Condition="'$(Flavor)' == 'Studio' or $([System.IO.File]::ReadAllText('/missing/file'))">north</Gallery>
               </PropertyGroup>
             </Project>
-            """))),
+            """)),
+            Extra: ["Painter", "Gallery"]),
 
         ["exists-rules"] = new("src/Bramble.Paper/Bramble.Paper.csproj", Files(
             ("build/marker.txt", "marker"),

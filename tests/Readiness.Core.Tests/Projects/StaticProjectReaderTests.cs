@@ -422,6 +422,27 @@ public sealed class StaticProjectReaderTests
     }
 
     [Fact]
+    public void AndOr_StopWhenTheLeftSideDecides_UnknownOnlyWhenItMatters()
+    {
+        // MSBuild short-circuits too: oracle layout "conditions" (Painter, Gallery) has dotnet msbuild skip a file read.
+        var project = Single(Read((Lib, """
+            <Project Sdk="Microsoft.NET.Sdk">
+              <PropertyGroup>
+                <Flavor>studio</Flavor>
+                <A Condition="'$(Flavor)' == 'home' and $([System.IO.File]::Exists('x'))">set</A>
+                <B Condition="'$(Flavor)' == 'studio' or $([System.IO.File]::Exists('x'))">set</B>
+                <C Condition="'$(Flavor)' == 'studio' and $([System.IO.File]::Exists('x'))">set</C>
+              </PropertyGroup>
+            </Project>
+            """)));
+
+        Assert.Null(project.Property("A"));
+        Assert.Equal("set", project.Value("B"));
+        Assert.Null(project.Property("C"));
+        Assert.Equal($"{Lib}:6: property function $([System.IO.File]::Exists('x')) is not evaluated; property C is skipped", Assert.Single(project.Unevaluated));
+    }
+
+    [Fact]
     public void ImportsOutsideTheRepositoryOrOfOtherSdks_NamedNotRead()
     {
         var project = Single(Read((Lib, """
@@ -544,6 +565,33 @@ public sealed class StaticProjectReaderTests
 
         Assert.Equal("a/A.csproj", Assert.Single(model.Projects).Path);
         Assert.Equal("b/B.csproj", Assert.Single(model.Problems).Path);
+    }
+
+    [Fact]
+    public void MangledProjectTrees_NeverReachAnInternalError()
+    {
+        // Every oracle layout, cut and spliced with MSBuild syntax at seeded random places: whatever comes out,
+        // the reader answers with projects, notes and problems, never with an exception of its own.
+        string[] splices = ["$(", "$([MSBuild]::GetPathOfFileAbove(", "'", "(", ")", "@(", "%(", "<", "\"", " and ", "!", "==", "%3B", "$(X.StartsWith(", "<Import Project=\"*.props\" />"];
+        var random = new Random(20261201);
+        for (var round = 0; round < 300; round++)
+        {
+            var layout = OracleLayouts.All.Values.ElementAt(random.Next(OracleLayouts.All.Count));
+            var files = layout.Files.ToDictionary(f => f.Key, f => f.Value);
+            var path = files.Keys.ElementAt(random.Next(files.Count));
+            var text = files[path];
+            var at = random.Next(text.Length);
+            files[path] = random.Next(3) switch
+            {
+                0 => text[..at] + splices[random.Next(splices.Length)] + text[at..],
+                1 => text[..at] + text[Math.Min(text.Length, at + random.Next(1, 40))..],
+                _ => text[..at] + text[random.Next(text.Length)..],
+            };
+
+            var model = new StaticProjectReader().Read(new InMemoryFileTree(files));
+
+            Assert.DoesNotContain(model.Problems, p => p.Message.Contains("could not be evaluated statically", StringComparison.Ordinal));
+        }
     }
 
     private static ProjectModel Read(params (string Path, string Text)[] files) =>
