@@ -53,6 +53,9 @@ public sealed class ServiceSettings
 
     public TimeSpan Poll { get; init; } = TimeSpan.FromSeconds(5);
 
+    /// <summary>How long a queued job waits after its pull request's last event before it may run.</summary>
+    public TimeSpan Quiet { get; init; } = TimeSpan.FromSeconds(1);
+
     public int MaxAttempts { get; init; } = 5;
 
     public int ForgeMaxRetries { get; init; } = 4;
@@ -168,6 +171,7 @@ public sealed class ServiceSettings
             Lease = TimeSpan.FromSeconds(Int(c, "Worker:LeaseSeconds", 120, 1, 3600)),
             Poll = TimeSpan.FromMilliseconds(Int(c, "Worker:PollMilliseconds", 5000, 10, 600_000)),
             MaxAttempts = Int(c, "Worker:MaxAttempts", 5, 1, 100),
+            Quiet = TimeSpan.FromMilliseconds(Int(c, "Worker:QuietMilliseconds", 1000, 0, 600_000)),
             JobRetryDelay = TimeSpan.FromMilliseconds(Int(c, "Worker:RetryDelayMilliseconds", 30_000, 0, 3_600_000)),
             ForgeMaxRetries = Int(c, "Forge:MaxRetries", 4, 0, 20),
             ForgeMaxRetryDelay = TimeSpan.FromMilliseconds(Int(c, "Forge:MaxRetryDelayMilliseconds", 120_000, 0, 3_600_000)),

@@ -34,6 +34,7 @@ public sealed class ServiceHost : WebApplicationFactory<Program>
             ["Readiness:Registry"] = "offline",
             ["Readiness:ReleaseBranches:0"] = "release/*",
             ["Readiness:Worker:PollMilliseconds"] = "100",
+            ["Readiness:Worker:QuietMilliseconds"] = "0",
             ["Readiness:Worker:LeaseSeconds"] = "3",
             ["Readiness:Worker:RetryDelayMilliseconds"] = "100",
             ["Readiness:PublicUrl"] = "http://127.0.0.1:5080/",
