@@ -34,8 +34,7 @@ internal static class TagReader
     }
 
     /// <summary>
-    /// Every tag whose commit is <paramref name="commit"/> or one of its ancestors, sorted by name. One walk of the
-    /// history collects the ancestors; it stops as soon as every tagged commit has been seen.
+    /// Every tag whose commit is <paramref name="commit"/> or one of its ancestors, sorted by name.
     /// </summary>
     public static IReadOnlyList<TagInfo> ReachableTags(Repository repository, Commit commit)
     {
@@ -56,19 +55,25 @@ internal static class TagReader
         var reachable = new List<Tag>();
         if (byCommit.Count > 0)
         {
-            var remaining = byCommit.Count;
-            var filter = new CommitFilter { IncludeReachableFrom = commit, SortBy = CommitSortStrategies.None };
-            foreach (var ancestor in repository.Commits.QueryBy(filter))
+            // One walk inside libgit2: commits reachable from any tagged commit but not from the inspected one. A tagged
+            // commit that the walk yields is not an ancestor; every other one is. Only those non-ancestors cross into
+            // managed code, so a long linear history costs one native walk, not ten thousand commit objects.
+            var filter = new CommitFilter
             {
-                if (byCommit.TryGetValue(ancestor.Id, out var tags))
+                IncludeReachableFrom = byCommit.Keys.ToArray(),
+                ExcludeReachableFrom = commit,
+                SortBy = CommitSortStrategies.None,
+            };
+            var notAncestors = new HashSet<ObjectId>();
+            foreach (var unreachable in repository.Commits.QueryBy(filter))
+            {
+                if (byCommit.ContainsKey(unreachable.Id))
                 {
-                    reachable.AddRange(tags);
-                    if (--remaining == 0)
-                    {
-                        break;
-                    }
+                    notAncestors.Add(unreachable.Id);
                 }
             }
+
+            reachable.AddRange(byCommit.Where(p => !notAncestors.Contains(p.Key)).SelectMany(p => p.Value));
         }
 
         return reachable

@@ -10,7 +10,7 @@ namespace Readiness.Registries;
 
 /// <summary>
 /// A NuGet V3 HTTP feed: the service index, then per id the flat container (versions, authoritative), the
-/// registration index (id spelling, listed, deprecation) and the search service (owners) in parallel. Registration
+/// registration index (id spelling, listed, deprecation) and, when asked, the search service (owners) in parallel. Registration
 /// and search are optional: when a feed lacks them or they fail, those facts are unknown (null), never guessed.
 /// Credentials come only from the user's NuGet configuration and are sent only to the service index's origin.
 /// </summary>
@@ -29,6 +29,7 @@ public sealed class NuGetFeedRegistry : IPackageRegistry, IDisposable
     private readonly Uri serviceIndexUrl;
     private readonly HttpClient http;
     private readonly bool hasCredentials;
+    private readonly bool askOwners;
     private readonly string? configProblem;
     private readonly Lock gate = new();
     private Task<ServiceIndex>? serviceIndex;
@@ -46,6 +47,7 @@ public sealed class NuGetFeedRegistry : IPackageRegistry, IDisposable
         // user's NuGet configuration only, so an address taken from a repository cannot carry its own.
         serviceIndexUrl = new Uri(serviceIndex.GetComponents(UriComponents.AbsoluteUri & ~UriComponents.UserInfo, UriFormat.UriEscaped));
         Source = FeedUrls.Display(serviceIndexUrl);
+        askOwners = options.AskOwners;
 
         NetworkCredential? credential = null;
         try
@@ -72,7 +74,15 @@ public sealed class NuGetFeedRegistry : IPackageRegistry, IDisposable
             hasCredentials = true;
         }
 
-        http = new HttpClient(handler) { Timeout = options.Timeout, MaxResponseContentBufferSize = MaxResponseBytes };
+        // HTTP/2 where the feed offers it (TLS with ALPN): the parallel lookups then share one connection instead of
+        // opening one each; plain HTTP and HTTP/1.1-only feeds are asked over HTTP/1.1.
+        http = new HttpClient(handler)
+        {
+            Timeout = options.Timeout,
+            MaxResponseContentBufferSize = MaxResponseBytes,
+            DefaultRequestVersion = HttpVersion.Version20,
+            DefaultVersionPolicy = HttpVersionPolicy.RequestVersionOrLower,
+        };
         http.DefaultRequestHeaders.UserAgent.ParseAdd("Readiness/0.1");
     }
 
@@ -84,7 +94,7 @@ public sealed class NuGetFeedRegistry : IPackageRegistry, IDisposable
         var index = await ServiceIndexAsync(cancellationToken).ConfigureAwait(false);
         var versionsTask = VersionsAsync(index, packageId, cancellationToken);
         var registrationTask = Optional(index.Registrations is { } r ? RegistrationAsync(r, packageId, cancellationToken) : null);
-        var searchTask = Optional(index.Search is { } s ? SearchAsync(s, packageId, cancellationToken) : null);
+        var searchTask = Optional(askOwners && index.Search is { } s ? SearchAsync(s, packageId, cancellationToken) : null);
 
         var versions = await versionsTask.ConfigureAwait(false);
         var registration = await registrationTask.ConfigureAwait(false);

@@ -21,6 +21,12 @@ public sealed record RegistryOptions
     public TimeProvider TimeProvider { get; init; } = TimeProvider.System;
 
     /// <summary>
+    /// Also ask the feed's search service who owns each id (one more request per id). Worth it only when the
+    /// configuration lists <c>owners</c>; otherwise owners stay unknown.
+    /// </summary>
+    public bool AskOwners { get; init; }
+
+    /// <summary>
     /// A NuGet configuration file to take feed credentials from instead of the user's own configuration (the
     /// user-wide and machine-wide files). Never a file of the inspected repository.
     /// </summary>

@@ -19,7 +19,9 @@ h2 { font-size: 1.6rem; margin: 0 0 .5rem; }
 h3 { font-size: 1.15rem; margin: 1.75rem 0 .5rem; padding-top: .75rem; border-top: 1px solid var(--line); }
 a { color: var(--link); }
 table { border-collapse: collapse; width: 100%; margin: 1rem 0; font-size: .92rem; }
-th, td { border: 1px solid var(--line); padding: .35rem .6rem; text-align: left; vertical-align: top; overflow-wrap: anywhere; }
+th, td { border: 1px solid var(--line); padding: .35rem .6rem; text-align: left; vertical-align: top; }
+td:nth-child(-n+2) { white-space: nowrap; }
+td:nth-child(n+5) { overflow-wrap: anywhere; }
 th { background: var(--head); }
 tr:nth-child(even) td { background: var(--head); }
 ul { padding-left: 1.5rem; }

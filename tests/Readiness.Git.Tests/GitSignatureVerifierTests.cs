@@ -7,18 +7,12 @@ namespace Readiness.Git.Tests;
 /// Every verdict is compared with <c>git verify-tag</c> / <c>git verify-commit</c> run directly as the reference
 /// (git-config gpg.ssh.allowedSignersFile: an unlisted key has trust "undefined", so verification fails).
 /// </summary>
-public sealed class GitSignatureVerifierTests : IDisposable
+public sealed class GitSignatureVerifierTests(SigningKeysFixture fixture) : IClassFixture<SigningKeysFixture>, IDisposable
 {
-    private readonly SshKeys keys = new();
-    private readonly SshKey allowed;
-    private readonly SshKey stranger;
+    private readonly SshKeys keys = fixture.Keys;
+    private readonly SshKey allowed = fixture.Allowed;
+    private readonly SshKey stranger = fixture.Stranger;
     private readonly TestRepository repo = TestRepository.Create();
-
-    public GitSignatureVerifierTests()
-    {
-        allowed = keys.Create();
-        stranger = keys.Create("someone@elsewhere.example");
-    }
 
     [Fact]
     public void TagSignedByAllowedKey_IsValidWithSignerAndFingerprint()
@@ -175,11 +169,7 @@ public sealed class GitSignatureVerifierTests : IDisposable
         Assert.Equal("0123456789ABCDEF0123456789ABCDEF01234567", fingerprint);
     }
 
-    public void Dispose()
-    {
-        repo.Dispose();
-        keys.Dispose();
-    }
+    public void Dispose() => repo.Dispose();
 
     private GitResult Reference(TestRepository repository, string command, string target, SshKey listed)
     {

@@ -117,14 +117,49 @@ public sealed class GitSnapshotSourceErrorTests
     }
 
     [Fact]
-    public void OwnerValidation_IsOffForThisProcess()
+    public void RepositoryOwnedByAnotherUser_IsReadAndVerified()
     {
+        using var keys = new SshKeys();
+        var key = keys.Create();
         using var repo = TestRepository.Create();
-        repo.Write("a.txt", "1").Commit("one");
+        var sha = repo.Write("a.txt", "1").Commit("one");
+        repo.SignedTag("v2.4.0", "Release 2.4.0", key.PrivateKeyPath);
 
-        using var snapshot = source.Open(new SnapshotRequest(repo.Path));
+        if (Environment.UserName == "root" && ChownToNobody(repo.Path))
+        {
+            // git itself refuses the repository now (git-config safe.directory: "dubious ownership").
+            var refused = repo.TryGit("log", "-1");
+            Assert.False(refused.Succeeded);
+            Assert.Contains("dubious ownership", refused.StdErr, StringComparison.Ordinal);
+        }
+
+        using var snapshot = source.Open(new SnapshotRequest(repo.Path, "v2.4.0"));
+
+        Assert.Equal(sha, snapshot.Commit);
+        Assert.Equal("1", snapshot.Files.ReadText("a.txt"));
+        Assert.True(snapshot.Signatures!.VerifyTag("v2.4.0", SshKeys.AllowedSigners(key)).Valid);
 
         // Opening any repository runs the static constructor that turns libgit2's owner check off.
         Assert.False(LibGit2Sharp.GlobalSettings.GetOwnerValidation());
+    }
+
+    /// <summary>Hands the folder to the unprivileged user "nobody" (possible only as root); false when that fails.</summary>
+    private static bool ChownToNobody(string path)
+    {
+        var start = new System.Diagnostics.ProcessStartInfo("chown") { UseShellExecute = false, RedirectStandardError = true };
+        foreach (var arg in (string[])["-R", "nobody", path])
+        {
+            start.ArgumentList.Add(arg);
+        }
+
+        using var process = System.Diagnostics.Process.Start(start);
+        if (process is null)
+        {
+            return false;
+        }
+
+        process.StandardError.ReadToEnd();
+        process.WaitForExit();
+        return process.ExitCode == 0;
     }
 }

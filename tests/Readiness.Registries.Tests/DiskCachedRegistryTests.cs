@@ -17,6 +17,7 @@ public sealed class DiskCachedRegistryTests : IDisposable
         CacheFolder = cacheFolder.Folder,
         TimeProvider = clock,
         NuGetConfigFile = EmptyNuGetConfig.Path,
+        AskOwners = true,
     };
 
     private static int FlatRequests(LocalHttpFeed feed) => feed.Requests.Count(r => r.StartsWith("/v3-flatcontainer/", StringComparison.Ordinal));
@@ -39,7 +40,7 @@ public sealed class DiskCachedRegistryTests : IDisposable
         Assert.Equal("bramble.sketches", second.Id);
         Assert.Equal(first.RegistryId, second.RegistryId);
         Assert.Equal(first.Versions, second.Versions);
-        Assert.Equal(first.Owners, second.Owners);
+        Assert.Equal(["bramblecote"], second.Owners!);
     }
 
     [Fact]

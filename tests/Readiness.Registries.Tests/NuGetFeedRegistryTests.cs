@@ -14,7 +14,7 @@ public class NuGetFeedRegistryTests
             .Add("Bramble.Sketches", "2.3.1", listed: false)
             .Add("Bramble.Sketches", "2.4.0-RC.1", deprecated: true)
             .Owners("Bramble.Sketches", "bramblecote");
-        using var registry = new NuGetFeedRegistry(new Uri(feed.ServiceIndexUrl), Options);
+        using var registry = new NuGetFeedRegistry(new Uri(feed.ServiceIndexUrl), Options with { AskOwners = true });
 
         var lookup = await registry.LookupAsync("bramble.sketches", CancellationToken.None);
 
@@ -39,6 +39,18 @@ public class NuGetFeedRegistryTests
         // (package-base-address-resource, registration-base-url-resource).
         Assert.Contains("/v3-flatcontainer/bramble.sketches/index.json", feed.Requests);
         Assert.Contains("/v3/registration5-gz-semver2/bramble.sketches/index.json", feed.Requests);
+    }
+
+    [Fact]
+    public async Task OwnersNotAskedFor_AreUnknownAndCostNoRequest()
+    {
+        using var feed = LocalHttpFeed.Start().Add("Bramble.Sketches", "2.3.0").Owners("Bramble.Sketches", "bramblecote");
+        using var registry = new NuGetFeedRegistry(new Uri(feed.ServiceIndexUrl), Options);
+
+        var lookup = await registry.LookupAsync("Bramble.Sketches", CancellationToken.None);
+
+        Assert.Null(lookup.Owners);
+        Assert.DoesNotContain(feed.Requests, r => r.StartsWith("/query", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -91,7 +103,7 @@ public class NuGetFeedRegistryTests
         using var feed = LocalHttpFeed.Start().Add("Bramble.Sketches", "2.3.0");
         feed.WithRegistration = false;
         feed.WithSearch = false;
-        using var registry = new NuGetFeedRegistry(new Uri(feed.ServiceIndexUrl), Options);
+        using var registry = new NuGetFeedRegistry(new Uri(feed.ServiceIndexUrl), Options with { AskOwners = true });
 
         var lookup = await registry.LookupAsync("Bramble.Sketches", CancellationToken.None);
 

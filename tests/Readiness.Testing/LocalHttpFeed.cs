@@ -48,6 +48,9 @@ public sealed class LocalHttpFeed : IDisposable
     /// <summary>How long a <see cref="FeedFault.Slow"/> answer waits.</summary>
     public TimeSpan Delay { get; set; } = TimeSpan.FromSeconds(30);
 
+    /// <summary>Added before every answer, to stand for the network between a user and a real feed.</summary>
+    public TimeSpan Latency { get; set; }
+
     /// <summary>When set, every request needs HTTP Basic authentication with these (401 otherwise).</summary>
     public (string User, string Password)? RequiredCredentials { get; set; }
 
@@ -156,6 +159,11 @@ public sealed class LocalHttpFeed : IDisposable
             var path = context.Request.Url!.AbsolutePath;
             requests.Enqueue(context.Request.Url.PathAndQuery);
             authorizations.Enqueue(context.Request.Headers["Authorization"]);
+            if (Latency > TimeSpan.Zero)
+            {
+                await Task.Delay(Latency, stopping.Token).ConfigureAwait(false);
+            }
+
             if (RequiredCredentials is { } required && !Authorized(context.Request, required))
             {
                 response.AddHeader("WWW-Authenticate", "Basic realm=\"feed\"");

@@ -85,14 +85,16 @@ public sealed class ReadinessRunner(
         return text is null ? RepositoryConfig.Empty : new RepositoryConfigParser(Parser).Parse(RepositoryConfig.FileName, text);
     }
 
-    /// <summary>The packable projects' ids and every package they depend on.</summary>
+    /// <summary>The packable projects' ids and every package they declare as a dependency.</summary>
     public static IEnumerable<string> RegistryIds(ProjectModel model)
     {
         ArgumentNullException.ThrowIfNull(model);
         foreach (var project in model.Packable)
         {
             yield return project.PackageId;
-            foreach (var reference in project.PackageReferences)
+            // Only the dependencies the package will declare: private ones (PrivateAssets="all", IncludeAssets="none")
+            // stay out of the nuspec and out of the registry checks, so they cost no lookup.
+            foreach (var reference in Checks.Registry.RegistrySubjects.DeclaredDependencies(project))
             {
                 yield return reference.Id;
             }

@@ -89,7 +89,7 @@ public static class LicenseExpressionJudge
                 $"'{text}' uses deprecated SPDX identifier{(deprecated.Count == 1 ? string.Empty : "s")} {string.Join(", ", deprecated)}, which NuGet refuses ({nugetMessage}).",
                 $"Replace: {string.Join("; ", replacements)} (SPDX license list; -only and -or-later say whether later versions may be chosen).",
                 [],
-                false);
+                spdxValid);
         }
 
         if (spdxValid)

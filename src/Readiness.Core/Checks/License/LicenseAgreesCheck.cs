@@ -104,7 +104,7 @@ public sealed class LicenseAgreesCheck : ICheck
                     package, evidence);
             case false when recognised.Length > 0:
                 return Finding.Fail(
-                    LicenseNote.With($"{fileNames}: recognised as {string.Join(" + ", recognised.Select(s => s.Name))}, but {project.Path} declares {declared} ({expression.Location})."),
+                    LicenseNote.With($"{fileNames}: recognised as {string.Join(" + ", recognised.Select(s => s.Name))}, but {Expression} declares {declared} ({expression.Location})."),
                     Descriptor.Fix.Replace("ID", Expected(node!).FirstOrDefault() ?? "ID", StringComparison.Ordinal),
                     package, evidence);
             case false:
@@ -139,7 +139,7 @@ public sealed class LicenseAgreesCheck : ICheck
         left == false || right == false ? false : left is null || right is null ? null : true;
 
     private static IEnumerable<string> Expected(SpdxNode node) =>
-        node.Licenses.Where(l => LicenseSignatures.For(l.ToString()) is not null).Select(l => l.Id);
+        node.Licenses.Where(l => LicenseSignatures.For(l.ToString()) is not null).Select(l => SpdxLicenseList.License(l.Id)?.LicenseID ?? l.Id);
 
     private static Finding JudgePackedFile(CheckContext context, ProjectInfo project, PropertyValue file)
     {

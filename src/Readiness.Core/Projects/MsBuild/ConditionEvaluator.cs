@@ -9,10 +9,8 @@ namespace Readiness.Core.Projects.MsBuild;
 /// otherwise as strings ignoring case; <c>&lt;</c>, <c>&gt;</c>, <c>&lt;=</c>, <c>&gt;=</c> need numbers or versions;
 /// <c>and</c>/<c>or</c> short-circuit. <c>Exists()</c> asks the file tree. Anything else is "not evaluated" (null).
 /// </summary>
-internal sealed class ConditionEvaluator(Expander expander, FileSet files)
+internal sealed class ConditionEvaluator(Expander expander, FileSet files, Dictionary<string, Node?> parsed)
 {
-    private readonly Dictionary<string, Node?> parsed = new(StringComparer.Ordinal);
-
     public ConditionResult Evaluate(string condition, ExpandScope scope, string existsBase)
     {
         if (condition.Trim().Length == 0)

@@ -22,6 +22,11 @@ internal sealed class Expander
 
     public Expansion Expand(string text, ExpandScope scope)
     {
+        if (text.IndexOf('(', StringComparison.Ordinal) < 0)
+        {
+            return new Expansion(text, null, []);
+        }
+
         var state = new ExpandState();
         var value = Expand(text, scope, state, 0);
         return new Expansion(value, state.Reason, state.Undefined);

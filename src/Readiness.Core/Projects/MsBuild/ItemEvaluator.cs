@@ -35,6 +35,8 @@ internal sealed class ItemEvaluator(
         ("PrivateAssets", "All"),
     ];
 
+    private static readonly XName ConditionName = "Condition";
+
     private readonly string projectFolder = RepoPath.Directory(projectPath);
     private readonly Dictionary<string, Dictionary<string, MetadataValue>> definitions = new(StringComparer.Ordinal);
     private readonly List<ItemRecord> items = [];
@@ -72,7 +74,7 @@ internal sealed class ItemEvaluator(
         foreach (var type in group.Element.Elements())
         {
             var name = type.Name.LocalName;
-            if (!KeptTypes.Contains(name) || !Test(type, group.File, $"item definition {name}"))
+            if (!KeptTypes.Contains(name) || !Test(type, group.File, "item definition", name))
             {
                 continue;
             }
@@ -102,11 +104,12 @@ internal sealed class ItemEvaluator(
         var include = element.Attribute("Include")?.Value;
         var update = element.Attribute("Update")?.Value;
         var remove = element.Attribute("Remove")?.Value;
-        var what = $"{type} {include ?? update ?? remove}";
-        if (!Test(element, file, what))
+        if (!Test(element, file, type, include ?? update ?? remove))
         {
             return;
         }
+
+        var what = $"{type} {include ?? update ?? remove}";
 
         if (include is not null)
         {
@@ -117,9 +120,12 @@ internal sealed class ItemEvaluator(
 
             var excluded = element.Attribute("Exclude")?.Value is { } exclude ? Specs(exclude, file, at, what) ?? [] : [];
             var metadata = Metadata(file, element);
-            foreach (var spec in specs.Where(s => !excluded.Any(x => Matches(type, s, x))))
+            var kept = specs.Where(s => !excluded.Any(x => Matches(type, s, x))).ToList();
+            foreach (var spec in kept)
             {
-                Add(new ItemRecord(type, spec, at, WithDefaults(type, metadata)));
+                // Each item gets its own metadata: a later Update changes one item, not its siblings.
+                var own = kept.Count == 1 && !definitions.ContainsKey(type) ? metadata : WithDefaults(type, metadata);
+                Add(new ItemRecord(type, spec, at, own));
             }
         }
         else if (update is not null)
@@ -207,31 +213,36 @@ internal sealed class ItemEvaluator(
         foreach (var attribute in element.Attributes().Where(a => !a.IsNamespaceDeclaration && !Operations.Contains(a.Name.LocalName)))
         {
             var name = attribute.Name.LocalName;
-            result[name] = new MetadataValue(name, Expand(attribute.Value, file, ProjectEvaluator.Location(file, attribute), $"metadata {name}"), ProjectEvaluator.Location(file, attribute));
+            var at = ProjectEvaluator.Location(file, attribute);
+            result[name] = new MetadataValue(name, Expand(attribute.Value, file, at, name), at);
         }
 
         foreach (var child in element.Elements())
         {
             var name = child.Name.LocalName;
-            if (!Test(child, file, $"metadata {name}"))
+            if (!Test(child, file, "metadata", name))
             {
                 continue;
             }
 
             var at = ProjectEvaluator.Location(file, child);
-            result[name] = new MetadataValue(name, Expand(child.Value, file, at, $"metadata {name}"), at);
+            result[name] = new MetadataValue(name, Expand(child.Value, file, at, name), at);
         }
 
         return result;
     }
 
-    private string Expand(string text, string file, SourceLocation at, string what)
+    private string Expand(string text, string file, SourceLocation at, string metadata)
     {
         var expansion = expander.Expand(text, new ExpandScope(file, at));
-        notes.Undefined(expansion.Undefined, at, what);
+        if (expansion.Undefined.Count > 0)
+        {
+            notes.Undefined(expansion.Undefined, at, $"metadata {metadata}");
+        }
+
         if (expansion.Unevaluated is { } why)
         {
-            notes.Add($"{at}: {what} is kept as written: {why}");
+            notes.Add($"{at}: metadata {metadata} is kept as written: {why}");
         }
 
         return Escaping.Unescape(expansion.Value);
@@ -275,9 +286,9 @@ internal sealed class ItemEvaluator(
         return target.Kind == PathKind.Inside ? target.Path : null;
     }
 
-    private bool Test(XElement element, string file, string what)
+    private bool Test(XElement element, string file, string kind, string? name = null)
     {
-        if (element.Attribute("Condition")?.Value is not { } condition)
+        if (element.Attribute(ConditionName)?.Value is not { } condition)
         {
             return true;
         }
@@ -285,7 +296,12 @@ internal sealed class ItemEvaluator(
         // Item and ItemGroup conditions resolve Exists() against the project folder (checked against dotnet msbuild).
         var at = ProjectEvaluator.Location(file, element);
         var result = conditions.Evaluate(condition, new ExpandScope(file, at), projectFolder);
-        notes.Undefined(result.Undefined, at, $"the condition of {what}");
+        var what = name is null ? kind : $"{kind} {name}";
+        if (result.Undefined.Count > 0)
+        {
+            notes.Undefined(result.Undefined, at, $"the condition of {what}");
+        }
+
         if (result.Value is null)
         {
             notes.Add($"{result.Reason}; {what} is skipped");
@@ -378,7 +394,8 @@ internal sealed class ItemEvaluator(
             notes.Add($"{item.Location}: ProjectReference {item.Spec} points outside the repository");
         }
 
-        return new ProjectReferenceItem(path ?? item.Spec.Replace('\\', '/'), Plain(item.Metadata), item.Location);
+        path ??= VirtualPaths.NormalizeClimbing(projectFolder.Length == 0 ? item.Spec : projectFolder + "/" + item.Spec);
+        return new ProjectReferenceItem(path, Plain(item.Metadata), item.Location);
     }
 
     private static Dictionary<string, string> Plain(Dictionary<string, MetadataValue> metadata)

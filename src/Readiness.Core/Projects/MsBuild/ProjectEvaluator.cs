@@ -17,6 +17,8 @@ internal sealed class ProjectEvaluator
         "MSBuildProjectFullPath", "MSBuildProjectName",
     ];
 
+    private static readonly XName ConditionName = "Condition";
+
     private readonly ReadSession session;
     private readonly string projectPath;
     private readonly string projectFolder;
@@ -37,7 +39,7 @@ internal sealed class ProjectEvaluator
         this.projectPath = projectPath;
         projectFolder = RepoPath.Directory(projectPath);
         expander = new Expander(properties, session.Files, projectFolder);
-        conditions = new ConditionEvaluator(expander, session.Files);
+        conditions = new ConditionEvaluator(expander, session.Files, session.Conditions);
 
         var at = new SourceLocation(projectPath, 0);
         var fileName = RepoPath.FileName(projectPath);
@@ -145,7 +147,7 @@ internal sealed class ProjectEvaluator
         foreach (var element in group.Elements())
         {
             var name = element.Name.LocalName;
-            if (!Test(element, file, projectFolder, $"property {name}"))
+            if (!Test(element, file, projectFolder, "property", name))
             {
                 continue;
             }
@@ -177,7 +179,10 @@ internal sealed class ProjectEvaluator
                 notes.Add(why.StartsWith(at.ToString() + ":", StringComparison.Ordinal) ? why : $"{at}: {name} uses a value that is not evaluated ({why})");
             }
 
-            notes.Undefined(expansion.Undefined, at, $"property {name}");
+            if (expansion.Undefined.Count > 0)
+            {
+                notes.Undefined(expansion.Undefined, at, $"property {name}");
+            }
         }
     }
 
@@ -240,7 +245,7 @@ internal sealed class ProjectEvaluator
     {
         var at = Location(file, element);
         var project = element.Attribute("Project")?.Value ?? string.Empty;
-        if (!Test(element, file, RepoPath.Directory(file), $"import of {project}"))
+        if (!Test(element, file, RepoPath.Directory(file), "import of", project))
         {
             return;
         }
@@ -254,6 +259,7 @@ internal sealed class ProjectEvaluator
             }
             else if (string.Equals(project, "Sdk.targets", StringComparison.OrdinalIgnoreCase))
             {
+                NoteUnknownSdk(name, at);
                 SdkTargets(at);
             }
             else
@@ -344,14 +350,8 @@ internal sealed class ProjectEvaluator
 
     private void SdkProps(string name, SourceLocation at)
     {
-        if (SdkModel.IsDotNet(name))
-        {
-            dotNetSdk = true;
-        }
-        else
-        {
-            notes.Add($"{at}: MSBuild SDK {name} is not read; properties and items it sets are unknown");
-        }
+        dotNetSdk |= SdkModel.IsDotNet(name);
+        NoteUnknownSdk(name, at);
 
         if (propsDone)
         {
@@ -373,6 +373,14 @@ internal sealed class ProjectEvaluator
         {
             ImportFile(packagesProps, at, 0);
             Sdk("CentralPackageVersionsFileImported", "true", at, [], "set by NuGet.props when it imports Directory.Packages.props");
+        }
+    }
+
+    private void NoteUnknownSdk(string name, SourceLocation at)
+    {
+        if (!SdkModel.IsDotNet(name))
+        {
+            notes.Add($"{at}: MSBuild SDK {name} is not read; properties and items it sets are unknown");
         }
     }
 
@@ -496,16 +504,21 @@ internal sealed class ProjectEvaluator
     }
 
     /// <summary>Evaluates an element's condition; a condition that cannot be evaluated skips the element, with a note.</summary>
-    private bool Test(XElement element, string file, string existsBase, string what)
+    private bool Test(XElement element, string file, string existsBase, string kind, string? name = null)
     {
-        if (element.Attribute("Condition")?.Value is not { } condition)
+        if (element.Attribute(ConditionName)?.Value is not { } condition)
         {
             return true;
         }
 
         var at = Location(file, element);
         var result = conditions.Evaluate(condition, new ExpandScope(file, at), existsBase);
-        notes.Undefined(result.Undefined, at, $"the condition of {what}");
+        var what = name is null ? kind : $"{kind} {name}";
+        if (result.Undefined.Count > 0)
+        {
+            notes.Undefined(result.Undefined, at, $"the condition of {what}");
+        }
+
         if (result.Value is null)
         {
             notes.Add($"{result.Reason}; {what} is skipped");

@@ -64,11 +64,17 @@ internal sealed class ProjectXmlCache(IFileTree files)
         }
         catch (XmlException e)
         {
-            var dtd = e.Message.Contains("DTD", StringComparison.Ordinal) || ContainsDoctype(bytes);
-            var message = dtd
-                ? "The file declares a DTD (<!DOCTYPE>); refused: project files never need one, and a DTD can expand entities without bound."
-                : $"Malformed XML: {e.Message}";
-            return new XmlLoad(null, new ProjectProblem(path, e.LineNumber > 0 ? e.LineNumber : null, message));
+            var doctype = bytes.AsSpan().IndexOf("<!DOCTYPE"u8);
+            if (doctype >= 0)
+            {
+                var line = bytes.AsSpan(0, doctype).Count((byte)'\n') + 1;
+                return new XmlLoad(null, new ProjectProblem(
+                    path,
+                    line,
+                    "The file declares a DTD (<!DOCTYPE>); refused: project files never need one, and a DTD can expand entities without bound."));
+            }
+
+            return new XmlLoad(null, new ProjectProblem(path, e.LineNumber > 0 ? e.LineNumber : null, $"Malformed XML: {e.Message}"));
         }
         catch (ArgumentException e)
         {
@@ -78,7 +84,4 @@ internal sealed class ProjectXmlCache(IFileTree files)
     }
 
     public static int Line(XObject node) => node is IXmlLineInfo info && info.HasLineInfo() ? info.LineNumber : 0;
-
-    private static bool ContainsDoctype(byte[] bytes) =>
-        bytes.AsSpan().IndexOf("<!DOCTYPE"u8) >= 0;
 }

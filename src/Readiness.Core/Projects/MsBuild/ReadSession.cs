@@ -11,6 +11,9 @@ internal sealed class ReadSession(IFileTree tree)
 
     public ProjectXmlCache Xml { get; } = new(tree);
 
+    /// <summary>Conditions parsed once per read: the same few recur in every project.</summary>
+    public Dictionary<string, ConditionParser.Node?> Conditions { get; } = new(StringComparer.Ordinal);
+
     public IEnumerable<ProjectProblem> ImportProblems => importProblems.Values;
 
     public void ReportImportProblem(ProjectProblem problem) => importProblems.TryAdd(problem.Path, problem);

@@ -43,5 +43,28 @@ internal static class VirtualPaths
         return normal is null ? PathTarget.Outside(p) : PathTarget.Inside(normal);
     }
 
+    /// <summary>Like <see cref="RepoPath.TryNormalize"/>, but keeps the '..' that climb above the root.</summary>
+    public static string NormalizeClimbing(string path)
+    {
+        var parts = new List<string>();
+        foreach (var part in path.Replace('\\', '/').Split('/'))
+        {
+            if (part.Length == 0 || part == ".")
+            {
+                continue;
+            }
+
+            if (part == ".." && parts.Count > 0 && parts[^1] != "..")
+            {
+                parts.RemoveAt(parts.Count - 1);
+                continue;
+            }
+
+            parts.Add(part);
+        }
+
+        return string.Join('/', parts);
+    }
+
     public static bool HasWildcard(string path) => path.Contains('*', StringComparison.Ordinal) || path.Contains('?', StringComparison.Ordinal);
 }

@@ -29,6 +29,9 @@ internal static class ChangelogFixtures
 
     public static RepositoryConfig PerPackageTags { get; } = RepositoryConfig.Empty with { TagPattern = "{id}/v{version}" };
 
-    public static ProjectInfo Project(string path, string? version = null) =>
-        TestProjects.Project(path, version is null ? null : TestProjects.Props(("Version", version)));
+    public static ProjectInfo Project(string path, string? version = null)
+    {
+        var builder = ProjectFixtures.Project(path);
+        return (version is null ? builder : builder.Property("Version", version)).Build();
+    }
 }

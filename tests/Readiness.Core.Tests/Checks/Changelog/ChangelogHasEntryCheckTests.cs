@@ -195,7 +195,7 @@ public sealed class ChangelogHasEntryCheckTests
     public void NoTag_DeclaredVersionJudgedAgainstToday()
     {
         // Without a tag the release date is today (TestSnapshots: 2026-12-01).
-        var projects = TestProjects.Model(Project(Library, "2.4.0"));
+        var projects = ProjectFixtures.Model(Project(Library, "2.4.0"));
 
         var finding = Assert.Single(check.Run(Context(Tree(ChangelogSamples.Released), tag: null, projects: projects)));
 
@@ -229,7 +229,7 @@ public sealed class ChangelogHasEntryCheckTests
         var files = new InMemoryFileTree()
             .Add("CHANGELOG.md", ChangelogSamples.Released)
             .Add("src/Bramble.Sketches.Lanternfly3/CHANGELOG.md", "# Changelog\n\n## [Unreleased]\n\n- Host 3.2 support.\n\n## [1.1.0] - 2026-08-01\n\n- First release.\n");
-        var projects = TestProjects.Model(Project(Library, "2.4.0"), Project(Plugin, "1.2.0"));
+        var projects = ProjectFixtures.Model(Project(Library, "2.4.0"), Project(Plugin, "1.2.0"));
 
         var finding = Assert.Single(check.Run(Context(files, tag: "Bramble.Sketches.Lanternfly3/v1.2.0", projects: projects, config: PerPackageTags)));
 
@@ -245,7 +245,7 @@ public sealed class ChangelogHasEntryCheckTests
         var files = new InMemoryFileTree()
             .Add("src/Bramble.Sketches/CHANGELOG.md", ChangelogSamples.Released)
             .Add("src/Bramble.Sketches.Lanternfly3/CHANGELOG.md", "# Changelog\n\n## [1.2.0] - 2026-11-30\n\n- Host 3.2 support.\n");
-        var projects = TestProjects.Model(Project(Library, "2.4.0"), Project(Plugin, "1.2.0"));
+        var projects = ProjectFixtures.Model(Project(Library, "2.4.0"), Project(Plugin, "1.2.0"));
 
         var findings = check.Run(Context(files, tag: null, projects: projects, config: PerPackageTags)).ToList();
 

@@ -57,7 +57,7 @@ public sealed class ChangelogPresentCheckTests
     {
         var files = new InMemoryFileTree()
             .Add("src/Bramble.Sketches/CHANGELOG.md", "# Changelog\n");
-        var projects = TestProjects.Model(Project(Library), Project(Plugin), TestProjects.Project("tests/Bramble.Sketches.Tests/Bramble.Sketches.Tests.csproj", TestProjects.Props(("IsTestProject", "true"))));
+        var projects = ProjectFixtures.Model(Project(Library), Project(Plugin), ProjectFixtures.Project("tests/Bramble.Sketches.Tests/Bramble.Sketches.Tests.csproj").Property("IsTestProject", "true").Build());
 
         var findings = check.Run(Context(files, projects: projects)).ToList();
 
@@ -70,7 +70,7 @@ public sealed class ChangelogPresentCheckTests
     public void RootChangelog_CoversEveryProject()
     {
         var files = new InMemoryFileTree().Add("CHANGELOG.md", "# Changelog\n");
-        var projects = TestProjects.Model(Project(Library), Project(Plugin));
+        var projects = ProjectFixtures.Model(Project(Library), Project(Plugin));
 
         var finding = Assert.Single(check.Run(Context(files, projects: projects)));
 
@@ -84,7 +84,7 @@ public sealed class ChangelogPresentCheckTests
         var files = new InMemoryFileTree()
             .Add("CHANGELOG.md", "# Changelog\n")
             .Add("src/Bramble.Sketches.Lanternfly3/CHANGELOG.md", "# Changelog\n");
-        var projects = TestProjects.Model(Project(Library), Project(Plugin));
+        var projects = ProjectFixtures.Model(Project(Library), Project(Plugin));
 
         var finding = Assert.Single(check.Run(Context(files, tag: "Bramble.Sketches.Lanternfly3/v1.2.0", projects: projects, config: PerPackageTags)));
 

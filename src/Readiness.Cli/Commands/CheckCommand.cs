@@ -1,0 +1,121 @@
+using System.CommandLine;
+using Readiness.Core.Engine;
+using Readiness.Core.Registry;
+using Readiness.Core.Reports;
+using Readiness.Core.Snapshots;
+using Readiness.Registries;
+using Readiness.Rendering;
+
+namespace Readiness.Cli.Commands;
+
+/// <summary><c>readiness check [PATH]</c>: inspect one release candidate and report.</summary>
+public sealed class CheckCommand(Composition composition, CliConsole console)
+{
+    private readonly CheckOptions options = new();
+
+    public Command Build()
+    {
+        var command = new Command("check", "Inspect one release candidate and report whether it is ready.");
+        options.AddTo(command);
+        command.SetAction((parse, token) => RunAsync(parse, token));
+        return command;
+    }
+
+    public async Task<int> RunAsync(ParseResult parse, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(parse);
+        var path = parse.GetValue(options.Path);
+        if (path is not null && path.StartsWith('-'))
+        {
+            await console.Error.WriteLineAsync($"readiness: unknown option '{path}' (see readiness check --help)").ConfigureAwait(false);
+            return ExitCodes.Usage;
+        }
+
+        var request = await BuildRequestAsync(parse, console.FullPath(path ?? "."), cancellationToken).ConfigureAwait(false);
+        var report = await composition.Runner.RunAsync(request, Registries(parse), cancellationToken).ConfigureAwait(false);
+        await WriteReportAsync(report, parse.GetValue(options.Format), parse.GetValue(options.Output), cancellationToken).ConfigureAwait(false);
+        return FailPolicy.ExitCode(report, parse.GetValue(options.FailOn) ?? "block");
+    }
+
+    public async Task<RunRequest> BuildRequestAsync(ParseResult parse, string repositoryPath, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(parse);
+        var checklistValue = parse.GetValue(options.Checklist);
+        var definition = checklistValue is null
+            ? null
+            : await new ChecklistLoader(composition.Runner.Parser).LoadAsync(checklistValue, console.CurrentDirectory, cancellationToken).ConfigureAwait(false);
+        return new RunRequest(
+            new SnapshotRequest(repositoryPath, parse.GetValue(options.Ref) ?? "HEAD", parse.GetValue(options.Tag), parse.GetValue(options.Worktree)),
+            definition is null ? checklistValue : null,
+            definition,
+            parse.GetValue(options.Version),
+            parse.GetValue(options.Confirm) ?? [],
+            null,
+            TimeSpan.FromSeconds(Math.Clamp(parse.GetValue(options.RegistryTimeout), 1, 300)));
+    }
+
+    public RegistrySelector? Registries(ParseResult parse)
+    {
+        ArgumentNullException.ThrowIfNull(parse);
+        if (parse.GetValue(options.Offline))
+        {
+            return null;
+        }
+
+        return RegistriesFor(
+            parse.GetValue(options.Registry),
+            TimeSpan.FromSeconds(Math.Clamp(parse.GetValue(options.RegistryTimeout), 1, 300)),
+            parse.GetValue(options.NoCache));
+    }
+
+    /// <summary>The registry for a run: <paramref name="explicitSource"/>, else <c>publish-to</c>, else the public feed.</summary>
+    public RegistrySelector RegistriesFor(string? explicitSource, TimeSpan timeout, bool noCache)
+    {
+        var registryOptions = new RegistryOptions { Timeout = timeout, NoCache = noCache };
+        return config =>
+        {
+            var source = RegistryFactory.ChooseSource(explicitSource, config);
+            var local = source.Contains("://", StringComparison.Ordinal) ? source : console.FullPath(source);
+            return RegistryFactory.Create(local, registryOptions);
+        };
+    }
+
+    public async Task WriteReportAsync(Report report, string? format, string? output, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        var chosen = format ?? (output is not null ? FormatFromExtension(output) : console.IsTerminal ? "text" : "markdown");
+        var color = output is null && ConsoleColorPolicy.ShouldUseColor(console.IsTerminal, new Dictionary<string, string>(console.Environment));
+        var renderer = new RendererCatalog(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
+        if (output is null)
+        {
+            renderer.Render(report, console.Out);
+            return;
+        }
+
+        var file = console.FullPath(output);
+        Directory.CreateDirectory(Path.GetDirectoryName(file)!);
+        await using (var writer = new StreamWriter(file))
+        {
+            renderer.Render(report, writer);
+        }
+
+        await console.Out.WriteLineAsync(Summary(report) + $" Report written to {file}").ConfigureAwait(false);
+        _ = cancellationToken;
+    }
+
+    public static string Summary(Report report)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        var s = report.Summary;
+        var verdict = report.Ready ? "READY" : "NOT READY";
+        return $"{verdict}: {report.Subject.Version ?? "(no version)"} — {s.Pass} pass, {s.Fail} fail, {s.Skip} skip, {s.Manual} manual, {s.Error} error; {s.Blocking} blocking.";
+    }
+
+    private static string FormatFromExtension(string output) => Path.GetExtension(output).ToLowerInvariant() switch
+    {
+        ".json" => "json",
+        ".html" or ".htm" => "html",
+        ".md" or ".markdown" => "markdown",
+        _ => "text",
+    };
+}

@@ -1,0 +1,125 @@
+namespace Readiness.Cli.Hooks;
+
+/// <summary>Installs, removes and describes the pre-push hook of one repository.</summary>
+public sealed class HookInstaller(string repositoryPath)
+{
+    public const string HookName = "pre-push";
+    public const string ChainedName = "pre-push.readiness-chained";
+    public const string Marker = "Readiness pre-push hook";
+    public const string CommandSetting = "readiness.command";
+
+    /// <summary>The hooks folder git uses: <c>core.hooksPath</c> when set, else the git directory's <c>hooks/</c>.</summary>
+    public string HooksDirectory()
+    {
+        var path = GitProcess.Require(repositoryPath, "rev-parse", "--git-path", "hooks");
+        return Path.GetFullPath(path, repositoryPath);
+    }
+
+    public string Install(string hookSource, string command)
+    {
+        ArgumentNullException.ThrowIfNull(hookSource);
+        var hooks = HooksDirectory();
+        Directory.CreateDirectory(hooks);
+        var target = Path.Combine(hooks, HookName);
+        var chained = Path.Combine(hooks, ChainedName);
+        var messages = new List<string>();
+        if (File.Exists(target) && !IsOurs(target))
+        {
+            if (File.Exists(chained))
+            {
+                throw new InvalidOperationException($"{target} is not Readiness's hook and {chained} already exists; move one of them away first");
+            }
+
+            File.Move(target, chained);
+            messages.Add($"kept the existing hook as {chained}; it runs first");
+        }
+
+        File.Copy(hookSource, target, overwrite: true);
+        if (!OperatingSystem.IsWindows())
+        {
+            File.SetUnixFileMode(target, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute
+                | UnixFileMode.GroupRead | UnixFileMode.GroupExecute | UnixFileMode.OtherRead | UnixFileMode.OtherExecute);
+        }
+
+        GitProcess.Require(repositoryPath, "config", "--local", CommandSetting, command);
+        messages.Insert(0, $"installed {target} (readiness command: {command})");
+        return string.Join(Environment.NewLine, messages);
+    }
+
+    public string Uninstall()
+    {
+        var hooks = HooksDirectory();
+        var target = Path.Combine(hooks, HookName);
+        var chained = Path.Combine(hooks, ChainedName);
+        var messages = new List<string>();
+        if (File.Exists(target) && IsOurs(target))
+        {
+            File.Delete(target);
+            messages.Add($"removed {target}");
+        }
+        else
+        {
+            messages.Add($"no Readiness hook at {target}");
+        }
+
+        if (File.Exists(chained) && !File.Exists(target))
+        {
+            File.Move(chained, target);
+            messages.Add($"restored the earlier hook to {target}");
+        }
+
+        GitProcess.Run(repositoryPath, "config", "--local", "--unset", CommandSetting);
+        return string.Join(Environment.NewLine, messages);
+    }
+
+    /// <summary>What is installed, and whether it can work. Returns (healthy, lines).</summary>
+    public (bool Healthy, IReadOnlyList<string> Lines) Status()
+    {
+        var hooks = HooksDirectory();
+        var target = Path.Combine(hooks, HookName);
+        var lines = new List<string> { $"hooks folder: {hooks}" };
+        var healthy = true;
+        if (!File.Exists(target))
+        {
+            lines.Add("pre-push: not installed");
+            return (false, lines);
+        }
+
+        if (!IsOurs(target))
+        {
+            lines.Add("pre-push: another tool's hook (not Readiness's)");
+            return (false, lines);
+        }
+
+        var executable = OperatingSystem.IsWindows() || (File.GetUnixFileMode(target) & UnixFileMode.UserExecute) != 0;
+        lines.Add($"pre-push: Readiness hook{(executable ? string.Empty : " (NOT executable: git will ignore it)")}");
+        healthy &= executable;
+        if (File.Exists(Path.Combine(hooks, ChainedName)))
+        {
+            lines.Add($"chained: {ChainedName} runs first");
+        }
+
+        var (code, command, _) = GitProcess.Run(repositoryPath, "config", "--get", CommandSetting);
+        var found = code == 0 && (File.Exists(command) || CommandOnPath(command) is not null);
+        lines.Add(code == 0 ? $"readiness command: {command}{(found ? string.Empty : " (NOT FOUND)")}" : "readiness command: not recorded (PATH is searched)");
+        healthy &= code != 0 || found;
+        return (healthy, lines);
+    }
+
+    public static bool IsOurs(string path) =>
+        File.ReadLines(path).Take(5).Any(l => l.Contains(Marker, StringComparison.Ordinal));
+
+    public static string? CommandOnPath(string name)
+    {
+        foreach (var folder in (Environment.GetEnvironmentVariable("PATH") ?? string.Empty).Split(Path.PathSeparator, StringSplitOptions.RemoveEmptyEntries))
+        {
+            var candidate = Path.Combine(folder, name);
+            if (File.Exists(candidate))
+            {
+                return candidate;
+            }
+        }
+
+        return null;
+    }
+}

@@ -1,0 +1,3 @@
+using Readiness.Cli;
+
+return await new CliApp(CliConsole.System(), TimeProvider.System).RunAsync(args).ConfigureAwait(false);

@@ -1,0 +1,73 @@
+using Readiness.Cli;
+using Readiness.Cli.Demo;
+using Readiness.Testing;
+
+namespace Readiness.Bench;
+
+/// <summary>
+/// Time of <c>git push</c> of an ordinary branch to a local bare remote with and without the hook (interleaved, median
+/// of many runs), and of a release-tag push of the demo repository (offline registry).
+/// </summary>
+[System.Runtime.Versioning.UnsupportedOSPlatform("windows")]
+public sealed class HookPushBench : IBench
+{
+    public string Name => "hook-push";
+
+    public string Description => "git push with and without the pre-push hook; release-tag push of the demo";
+
+    public async Task RunAsync(string[] args, CancellationToken cancellationToken)
+    {
+        var runs = args.Length > 0 ? int.Parse(args[0], System.Globalization.CultureInfo.InvariantCulture) : 30;
+        using var plain = SampleLibrary.ReadyRelease();
+        using var hooked = SampleLibrary.ReadyRelease();
+        using var plainRemote = TestRepository.Bare();
+        using var hookedRemote = TestRepository.Bare();
+        plain.Git("remote", "add", "origin", plainRemote.Path);
+        hooked.Git("remote", "add", "origin", hookedRemote.Path);
+        await InstallAsync(hooked.Path, cancellationToken);
+
+        var without = new List<double>();
+        var with = new List<double>();
+        var env = new Dictionary<string, string> { ["READINESS_OFFLINE"] = "1" };
+        for (var i = 0; i < runs; i++)
+        {
+            foreach (var (repo, samples) in new[] { (plain, without), (hooked, with) })
+            {
+                repo.Write("notes.txt", $"run {i}\n").Commit($"Note {i}");
+                var watch = System.Diagnostics.Stopwatch.StartNew();
+                GitCli.Run(repo.Path, ["push", "-q", "origin", "main"], env);
+                samples.Add(watch.Elapsed.TotalMilliseconds);
+            }
+        }
+
+        Console.WriteLine($"branch push without hook: {Stats.Describe(without)}");
+        Console.WriteLine($"branch push with hook:    {Stats.Describe(with)}");
+        Console.WriteLine($"added by the hook (median): {Stats.Percentile(with, 0.5) - Stats.Percentile(without, 0.5):0.0} ms");
+
+        using var folder = new TempDirectory();
+        var demo = folder.Combine("bramble-sketches");
+        DemoRepository.Create(demo);
+        using var demoRemote = TestRepository.Bare();
+        GitCli.Run(demo, ["remote", "add", "origin", demoRemote.Path]);
+        GitCli.Run(demo, ["push", "-q", "origin", "main"]);
+        await InstallAsync(demo, cancellationToken);
+        var tagPush = Stats.Time(Math.Max(5, runs / 3), () => GitCli.TryRun(demo, ["push", "-q", "origin", "v2.4.0"], env));
+        Console.WriteLine($"release-tag push of the demo (blocked, offline): {Stats.Describe(tagPush)}");
+    }
+
+    private static async Task InstallAsync(string repository, CancellationToken cancellationToken)
+    {
+        var (file, prefix) = ReadinessProcess.Command;
+        var command = prefix.Length == 0 ? file : WriteLauncher(repository, file, prefix);
+        var console = new CliConsole(TextWriter.Null, Console.Error, false, new Dictionary<string, string> { ["READINESS_COMMAND"] = command }, repository, TextReader.Null);
+        await new CliApp(console, TimeProvider.System).RunAsync(["hook", "install"], cancellationToken);
+    }
+
+    private static string WriteLauncher(string repository, string file, string[] prefix)
+    {
+        var launcher = Path.Combine(repository, ".git", "readiness-launcher");
+        File.WriteAllText(launcher, $"#!/bin/sh\nexec {file} {string.Join(' ', prefix)} \"$@\"\n");
+        File.SetUnixFileMode(launcher, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
+        return launcher;
+    }
+}

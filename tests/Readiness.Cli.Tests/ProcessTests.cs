@@ -1,0 +1,47 @@
+using System.Diagnostics;
+using Readiness.Testing;
+
+namespace Readiness.Cli.Tests;
+
+/// <summary>The built program as a separate process: exit codes and the redirected-output default format.</summary>
+public sealed class ProcessTests
+{
+    public static string Program => Path.Combine(AppContext.BaseDirectory, OperatingSystem.IsWindows() ? "readiness.exe" : "readiness");
+
+    public static (int Exit, string Out, string Error) Run(string directory, params string[] args)
+    {
+        var info = new ProcessStartInfo(Program) { WorkingDirectory = directory, RedirectStandardOutput = true, RedirectStandardError = true };
+        foreach (var a in args)
+        {
+            info.ArgumentList.Add(a);
+        }
+
+        info.Environment["NO_COLOR"] = "1";
+        using var process = Process.Start(info)!;
+        var output = process.StandardOutput.ReadToEndAsync();
+        var error = process.StandardError.ReadToEndAsync();
+        Assert.True(process.WaitForExit(60_000), "readiness did not finish within 60 s");
+        return (process.ExitCode, output.Result, error.Result);
+    }
+
+    [Fact]
+    public void Check_AsAProcess_WritesMarkdownWhenRedirected_AndExitsOneWhenNotReady()
+    {
+        using var repo = SampleLibrary.ReadyRelease("1.2.0");
+        repo.Delete("CHANGELOG.md").Commit("Drop the changelog");
+        repo.AnnotatedTag("v1.2.1", "1.2.1\n");
+        var (exit, output, _) = Run(repo.Path, "check", "--offline", "--version", "1.2.1");
+        Assert.Equal(1, exit);
+        Assert.StartsWith("<!-- readiness-report -->", output, StringComparison.Ordinal);
+        Assert.Contains("changelog.present", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Check_AsAProcess_OutsideARepository_ExitsThree()
+    {
+        using var folder = new TempDirectory();
+        var (exit, _, error) = Run(folder.Path, "check", "--offline");
+        Assert.Equal(3, exit);
+        Assert.Contains("not a git repository", error, StringComparison.OrdinalIgnoreCase);
+    }
+}

@@ -1,0 +1,75 @@
+using Readiness.Core.Checks.Secrets;
+using Readiness.Core.Reports;
+using Readiness.Core.Tests.Secrets;
+using Readiness.Testing;
+using static Readiness.Core.Tests.Checks.CheckHarness;
+
+namespace Readiness.Core.Tests.Checks.Secrets;
+
+public sealed class NoneCommittedCheckTests
+{
+    [Fact]
+    public void EveryShape_FailsWithFileAndLineAndNeverTheSecret()
+    {
+        var files = new InMemoryFileTree().Add("README.md", "# Bramble.Sketches\n");
+        var secrets = new List<string>();
+        var i = 0;
+        foreach (var (_, token, _) in SecretFixtures.Tokens())
+        {
+            files.Add($"config/file{i++}.env", $"# line one\nSECRET={token}\n");
+            secrets.Add(token);
+        }
+
+        var pem = SecretFixtures.Pkcs8Pem();
+        files.Add("keys/release.key", pem);
+        secrets.Add(pem.Split('\n')[1]);
+        var password = SecretFixtures.Random("abcdefghijkLMNOP0123456789", 20, 77);
+        files.Add("nuget.config", $"<configuration>\n<packageSourceCredentials>\n<feed>\n<add key=\"ClearTextPassword\" value=\"{password}\" />\n</feed>\n</packageSourceCredentials>\n</configuration>\n");
+        secrets.Add(password);
+
+        var findings = Run(new NoneCommittedCheck(), files: files);
+
+        Assert.Equal(i + 2, findings.Count);
+        Assert.All(findings, f => AssertStatus(CheckStatus.Fail, f));
+        Assert.Contains(findings, f => EvidenceText(f).SequenceEqual(["config/file0.env:2"]));
+        Assert.Contains(findings, f => EvidenceText(f).SequenceEqual(["keys/release.key:1"]));
+        Assert.Contains(findings, f => EvidenceText(f).SequenceEqual(["nuget.config:4"]));
+        foreach (var finding in findings)
+        {
+            Assert.Contains("rotate", finding.Hint, StringComparison.Ordinal);
+            Assert.Contains("organisation's security policy", finding.Hint, StringComparison.Ordinal);
+            foreach (var secret in secrets)
+            {
+                SecretFixtures.AssertNotLeaked(secret, finding.Message);
+                SecretFixtures.AssertNotLeaked(secret, finding.Hint);
+                SecretFixtures.AssertNotLeaked(secret, string.Join(" ", EvidenceText(finding)));
+            }
+        }
+    }
+
+    [Fact]
+    public void CommittedPfx_FailsNamingTheFile()
+    {
+        var files = new InMemoryFileTree().Add("signing/release.pfx", SecretFixtures.Pfx());
+
+        var finding = Single(Run(new NoneCommittedCheck(), files: files));
+
+        AssertStatus(CheckStatus.Fail, finding);
+        Assert.Equal(["signing/release.pfx"], EvidenceText(finding));
+        Assert.Contains("PKCS#12", finding.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void CleanTree_PassesWithCounts()
+    {
+        var files = new InMemoryFileTree()
+            .Add("README.md", "Set the token in the CI secret store (never commit gh" + "p_ tokens).\n")
+            .Add("docs/aws.md", "Example key id: AK" + "IA" + "IOSFODNN7" + "EXAMPLE\n")
+            .Add("logo.png", new byte[] { 0x89, 0x50, 0x4E, 0x47, 0, 0, 0 });
+
+        var finding = Single(Run(new NoneCommittedCheck(), files: files));
+
+        AssertStatus(CheckStatus.Pass, finding);
+        Assert.Contains("3 tracked files (2 scanned as text, 1 binary", finding.Message, StringComparison.Ordinal);
+    }
+}
