@@ -69,6 +69,7 @@ public sealed class ServiceBench : IBench
                 ["Readiness:Forge:WebhookSecret"] = Secret,
                 ["Readiness:DataFolder"] = data.Path,
                 ["Readiness:Registry"] = "offline",
+                ["Readiness:AllowNonHttpsCloneUrls"] = "true",
                 ["Readiness:Worker:PollMilliseconds"] = "200",
                 ["Readiness:Worker:Count"] = Environment.GetEnvironmentVariable("BENCH_WORKERS") ?? "2",
             });

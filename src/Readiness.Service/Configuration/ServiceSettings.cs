@@ -47,6 +47,12 @@ public sealed class ServiceSettings
     /// <summary>The NuGet feed registry checks ask, or null for none (registry checks then skip).</summary>
     public string? Registry { get; init; }
 
+    /// <summary>
+    /// Whether deliveries may name clone URLs other than https (file paths, <c>file://</c>, ssh): for tests and
+    /// for forges on the same machine. Off by default.
+    /// </summary>
+    public bool AllowNonHttpsCloneUrls { get; init; }
+
     public int WorkerCount { get; init; } = 2;
 
     public TimeSpan Lease { get; init; } = TimeSpan.FromMinutes(2);
@@ -167,6 +173,7 @@ public sealed class ServiceSettings
             ReleaseLabel = NullIfBlank(c["ReleaseLabel"]) ?? "release",
             PublicUrl = publicUrl,
             Registry = NullIfBlank(c["Registry"]),
+            AllowNonHttpsCloneUrls = Bool(c, "AllowNonHttpsCloneUrls"),
             WorkerCount = Int(c, "Worker:Count", 2, 1, 64),
             Lease = TimeSpan.FromSeconds(Int(c, "Worker:LeaseSeconds", 120, 1, 3600)),
             Poll = TimeSpan.FromMilliseconds(Int(c, "Worker:PollMilliseconds", 5000, 10, 600_000)),
@@ -224,6 +231,14 @@ public sealed class ServiceSettings
         }
 
         return value;
+    }
+
+    private static bool Bool(IConfigurationSection c, string name)
+    {
+        var text = NullIfBlank(c[name]);
+        return text is null ? false
+            : bool.TryParse(text, out var value) ? value
+            : throw new ServiceConfigurationException($"{Section}:{name}", $"'{text}' is neither true nor false");
     }
 
     private static string? NullIfBlank(string? text) => string.IsNullOrWhiteSpace(text) ? null : text.Trim();

@@ -32,6 +32,7 @@ public sealed class ServiceHost : WebApplicationFactory<Program>
             ["Readiness:ApiToken"] = ApiToken,
             ["Readiness:DataFolder"] = dataFolder,
             ["Readiness:Registry"] = "offline",
+            ["Readiness:AllowNonHttpsCloneUrls"] = "true",
             ["Readiness:ReleaseBranches:0"] = "release/*",
             ["Readiness:Worker:PollMilliseconds"] = "100",
             ["Readiness:Worker:QuietMilliseconds"] = "0",
