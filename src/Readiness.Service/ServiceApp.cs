@@ -26,6 +26,10 @@ public static class ServiceApp
     /// <summary>The web application, ready to run; <paramref name="configure"/> may add settings or services first.</summary>
     public static WebApplication Build(string[] args, Action<WebApplicationBuilder>? configure = null)
     {
+        // Database reads and git work block pool threads for moments; on a two-core machine the pool would start
+        // with two threads and add more only slowly, which shows as webhook answers of hundreds of milliseconds.
+        ThreadPool.GetMinThreads(out var workerThreads, out var ioThreads);
+        ThreadPool.SetMinThreads(Math.Max(workerThreads, 64), ioThreads);
         var builder = WebApplication.CreateBuilder(args);
         if (string.IsNullOrWhiteSpace(builder.Configuration["urls"]))
         {
@@ -51,7 +55,8 @@ public static class ServiceApp
             sp.GetRequiredService<IConfiguration>(), sp.GetRequiredService<IHostEnvironment>().ContentRootPath));
         services.AddSingleton<SecretRedactor>();
         services.AddSingleton(sp => new Database(sp.GetRequiredService<ServiceSettings>().DatabasePath));
-        services.AddSingleton<JobStore>();
+        services.AddSingleton(sp => new JobStore(
+            sp.GetRequiredService<Database>(), sp.GetRequiredService<TimeProvider>(), sp.GetRequiredService<ServiceSettings>().Quiet));
         services.AddSingleton<RunStore>();
         services.AddSingleton<JobSignal>();
 

@@ -47,11 +47,20 @@ public sealed class ServiceSettings
     /// <summary>The NuGet feed registry checks ask, or null for none (registry checks then skip).</summary>
     public string? Registry { get; init; }
 
+    /// <summary>
+    /// Whether deliveries may name clone URLs other than https (file paths, <c>file://</c>, ssh): for tests and
+    /// for forges on the same machine. Off by default.
+    /// </summary>
+    public bool AllowNonHttpsCloneUrls { get; init; }
+
     public int WorkerCount { get; init; } = 2;
 
     public TimeSpan Lease { get; init; } = TimeSpan.FromMinutes(2);
 
     public TimeSpan Poll { get; init; } = TimeSpan.FromSeconds(5);
+
+    /// <summary>How long a queued job waits after its pull request's last event before it may run.</summary>
+    public TimeSpan Quiet { get; init; } = TimeSpan.FromSeconds(1);
 
     public int MaxAttempts { get; init; } = 5;
 
@@ -164,10 +173,12 @@ public sealed class ServiceSettings
             ReleaseLabel = NullIfBlank(c["ReleaseLabel"]) ?? "release",
             PublicUrl = publicUrl,
             Registry = NullIfBlank(c["Registry"]),
+            AllowNonHttpsCloneUrls = Bool(c, "AllowNonHttpsCloneUrls"),
             WorkerCount = Int(c, "Worker:Count", 2, 1, 64),
             Lease = TimeSpan.FromSeconds(Int(c, "Worker:LeaseSeconds", 120, 1, 3600)),
             Poll = TimeSpan.FromMilliseconds(Int(c, "Worker:PollMilliseconds", 5000, 10, 600_000)),
             MaxAttempts = Int(c, "Worker:MaxAttempts", 5, 1, 100),
+            Quiet = TimeSpan.FromMilliseconds(Int(c, "Worker:QuietMilliseconds", 1000, 0, 600_000)),
             JobRetryDelay = TimeSpan.FromMilliseconds(Int(c, "Worker:RetryDelayMilliseconds", 30_000, 0, 3_600_000)),
             ForgeMaxRetries = Int(c, "Forge:MaxRetries", 4, 0, 20),
             ForgeMaxRetryDelay = TimeSpan.FromMilliseconds(Int(c, "Forge:MaxRetryDelayMilliseconds", 120_000, 0, 3_600_000)),
@@ -220,6 +231,14 @@ public sealed class ServiceSettings
         }
 
         return value;
+    }
+
+    private static bool Bool(IConfigurationSection c, string name)
+    {
+        var text = NullIfBlank(c[name]);
+        return text is null ? false
+            : bool.TryParse(text, out var value) ? value
+            : throw new ServiceConfigurationException($"{Section}:{name}", $"'{text}' is neither true nor false");
     }
 
     private static string? NullIfBlank(string? text) => string.IsNullOrWhiteSpace(text) ? null : text.Trim();

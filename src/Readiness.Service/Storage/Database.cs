@@ -1,10 +1,11 @@
+using System.Threading.Channels;
 using Microsoft.Data.Sqlite;
 
 namespace Readiness.Service.Storage;
 
 /// <summary>
-/// The service's SQLite file (WAL mode): deliveries seen, jobs, runs. Writes from this process go one at a time;
-/// reads run beside them.
+/// The service's SQLite file (WAL mode): deliveries seen, jobs, runs. Writes go through one writer thread in
+/// batched transactions; reads run beside them on their own connections.
 /// </summary>
 public sealed class Database : IDisposable
 {
@@ -56,8 +57,13 @@ public sealed class Database : IDisposable
         CREATE INDEX IF NOT EXISTS runs_repository ON runs(repository, id);
         """;
 
-    private readonly SemaphoreSlim writeGate = new(1, 1);
+    private const int MaxBatch = 128;
+    private static readonly TimeSpan CheckpointEvery = TimeSpan.FromSeconds(2);
+    private readonly Channel<IWrite> writes = Channel.CreateUnbounded<IWrite>(new UnboundedChannelOptions { SingleReader = true });
     private readonly string connectionString;
+    private readonly Lock gate = new();
+    private Thread? writer;
+    private Timer? checkpoints;
 
     public Database(string path)
     {
@@ -70,6 +76,16 @@ public sealed class Database : IDisposable
             Pooling = true,
             DefaultTimeout = 30,
         }.ToString();
+    }
+
+    private interface IWrite
+    {
+        /// <summary>Runs inside the batch's transaction; keeps its result until the commit.</summary>
+        void Run(SqliteConnection connection, SqliteTransaction transaction);
+
+        void Committed();
+
+        void Failed(Exception error);
     }
 
     public string Path { get; }
@@ -92,31 +108,161 @@ public sealed class Database : IDisposable
         return connection;
     }
 
-    /// <summary>Runs <paramref name="work"/> in an immediate transaction, one writer of this process at a time.</summary>
-    public async Task<T> WriteAsync<T>(Func<SqliteConnection, SqliteTransaction, T> work, CancellationToken cancellationToken)
+    /// <summary>
+    /// Runs <paramref name="work"/> in a write transaction. One writer thread takes every write queued meanwhile into
+    /// the same transaction (group commit, each write in its own savepoint), so concurrent webhook deliveries share
+    /// one commit instead of queueing for one each. The task completes once the transaction is committed.
+    /// </summary>
+    public Task<T> WriteAsync<T>(Func<SqliteConnection, SqliteTransaction, T> work, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(work);
-        await writeGate.WaitAsync(cancellationToken).ConfigureAwait(false);
-        try
+        cancellationToken.ThrowIfCancellationRequested();
+        EnsureWriter();
+        var write = new Write<T>(work);
+        if (!writes.Writer.TryWrite(write))
         {
-            using var connection = Open();
-            using var transaction = connection.BeginTransaction(deferred: false);
-            var result = work(connection, transaction);
-            transaction.Commit();
-            return result;
+            throw new ObjectDisposedException(nameof(Database));
         }
-        finally
-        {
-            writeGate.Release();
-        }
+
+        return write.Task;
     }
 
-    public void Dispose() => writeGate.Dispose();
+    public void Dispose()
+    {
+        writes.Writer.TryComplete();
+        writer?.Join(TimeSpan.FromSeconds(30));
+        checkpoints?.Dispose();
+        if (writer is not null)
+        {
+            Checkpoint();
+        }
+    }
 
     private static void Execute(SqliteConnection connection, string sql)
     {
         using var command = connection.CreateCommand();
         command.CommandText = sql;
         command.ExecuteNonQuery();
+    }
+
+    private void EnsureWriter()
+    {
+        if (writer is not null)
+        {
+            return;
+        }
+
+        lock (gate)
+        {
+            writer ??= StartWriter();
+        }
+    }
+
+    private Thread StartWriter()
+    {
+        var thread = new Thread(WriteLoop) { IsBackground = true, Name = "readiness-db-writer" };
+        thread.Start();
+        checkpoints = new Timer(_ => Checkpoint(), null, CheckpointEvery, CheckpointEvery);
+        return thread;
+    }
+
+    /// <summary>
+    /// Copies the write-ahead log into the database file beside the writer (a passive checkpoint waits for no one),
+    /// so the writer itself never stops for the file system's flush.
+    /// </summary>
+    private void Checkpoint()
+    {
+        try
+        {
+            using var connection = Open();
+            Execute(connection, "PRAGMA wal_checkpoint(PASSIVE);");
+        }
+        catch (SqliteException)
+        {
+            // The next tick tries again.
+        }
+    }
+
+    private SqliteConnection OpenWriter()
+    {
+        var connection = Open();
+        Execute(connection, "PRAGMA wal_autocheckpoint=0;");
+        return connection;
+    }
+
+    private void WriteLoop()
+    {
+        var batch = new List<IWrite>(MaxBatch);
+        SqliteConnection? connection = null;
+        try
+        {
+            while (writes.Reader.WaitToReadAsync().AsTask().GetAwaiter().GetResult())
+            {
+                batch.Clear();
+                while (batch.Count < MaxBatch && writes.Reader.TryRead(out var next))
+                {
+                    batch.Add(next);
+                }
+
+                connection ??= OpenWriter();
+                try
+                {
+                    using var transaction = connection.BeginTransaction(deferred: false);
+                    var done = new List<IWrite>(batch.Count);
+                    foreach (var write in batch)
+                    {
+                        Execute(connection, transaction, "SAVEPOINT w");
+                        try
+                        {
+                            write.Run(connection, transaction);
+                            Execute(connection, transaction, "RELEASE w");
+                            done.Add(write);
+                        }
+#pragma warning disable CA1031 // one failing write must not fail the others in its batch
+                        catch (Exception e)
+#pragma warning restore CA1031
+                        {
+                            Execute(connection, transaction, "ROLLBACK TO w; RELEASE w");
+                            write.Failed(e);
+                        }
+                    }
+
+                    transaction.Commit();
+                    done.ForEach(w => w.Committed());
+                }
+                catch (SqliteException e)
+                {
+                    batch.ForEach(w => w.Failed(e));
+                    connection.Dispose();
+                    connection = null;
+                }
+            }
+        }
+        finally
+        {
+            connection?.Dispose();
+        }
+    }
+
+    private static void Execute(SqliteConnection connection, SqliteTransaction transaction, string sql)
+    {
+        using var command = connection.CreateCommand();
+        command.Transaction = transaction;
+        command.CommandText = sql;
+        command.ExecuteNonQuery();
+    }
+
+    private sealed class Write<T>(Func<SqliteConnection, SqliteTransaction, T> work) : IWrite
+    {
+        private readonly TaskCompletionSource<T> completion = new(TaskCreationOptions.RunContinuationsAsynchronously);
+        private T? result;
+
+        public Task<T> Task => completion.Task;
+
+        public void Run(SqliteConnection connection, SqliteTransaction transaction) => result = work(connection, transaction);
+
+        public void Committed() => completion.TrySetResult(result!);
+
+        public void Failed(Exception error) => completion.TrySetException(error);
     }
 }

@@ -5,8 +5,10 @@ namespace Readiness.Service.Storage;
 /// <summary>
 /// Deliveries and jobs. A job is claimed with a lease; a lease that runs out (the process died) makes the job
 /// claimable again. Jobs for one pull request collapse to the newest head commit and never run side by side.
+/// A queued job waits for a quiet period after its last event, so a burst of events (opened, labeled, a push)
+/// becomes one run.
 /// </summary>
-public sealed class JobStore(Database database, TimeProvider time)
+public sealed class JobStore(Database database, TimeProvider time, TimeSpan quietPeriod = default)
 {
     private const string Columns =
         "id, repository, clone_url, installation_id, pr_number, head_sha, base_ref, body, release_reason, delivery_id, deliveries, state, lease_owner, lease_until, attempts, run_id";
@@ -39,7 +41,7 @@ public sealed class JobStore(Database database, TimeProvider time)
             long jobId;
             using (var collapse = Command(c, t, """
                 UPDATE jobs SET head_sha = $sha, base_ref = $base, body = $body, release_reason = $reason, clone_url = $url,
-                    installation_id = $installation, delivery_id = $delivery, deliveries = deliveries + 1, updated = $now
+                    installation_id = $installation, delivery_id = $delivery, deliveries = deliveries + 1, updated = $now, not_before = $due
                 WHERE id = (SELECT id FROM jobs WHERE repository = $repo AND pr_number = $pr AND state = 'queued' ORDER BY id DESC LIMIT 1)
                 RETURNING id
                 """))
@@ -55,8 +57,8 @@ public sealed class JobStore(Database database, TimeProvider time)
                 {
                     using var insert = Command(c, t, """
                         INSERT INTO jobs(repository, clone_url, installation_id, pr_number, head_sha, base_ref, body, release_reason,
-                            delivery_id, state, created, updated)
-                        VALUES ($repo, $url, $installation, $pr, $sha, $base, $body, $reason, $delivery, 'queued', $now, $now)
+                            delivery_id, state, not_before, created, updated)
+                        VALUES ($repo, $url, $installation, $pr, $sha, $base, $body, $reason, $delivery, 'queued', $due, $now, $now)
                         RETURNING id
                         """);
                     AddRequest(insert, request, deliveryId, now);
@@ -215,8 +217,9 @@ public sealed class JobStore(Database database, TimeProvider time)
         return command;
     }
 
-    private static void AddRequest(SqliteCommand command, JobRequest r, string deliveryId, long now)
+    private void AddRequest(SqliteCommand command, JobRequest r, string deliveryId, long now)
     {
+        command.Parameters.AddWithValue("$due", now + (long)quietPeriod.TotalMilliseconds);
         command.Parameters.AddWithValue("$repo", r.Repository);
         command.Parameters.AddWithValue("$url", r.CloneUrl);
         command.Parameters.AddWithValue("$installation", (object?)r.InstallationId ?? DBNull.Value);

@@ -51,6 +51,11 @@ public sealed class WebhookEndpoint(ServiceSettings settings, JobStore jobs, Job
                 return Results.Json(new { error = problem }, statusCode: StatusCodes.Status400BadRequest);
             }
 
+            if (!settings.AllowNonHttpsCloneUrls && !pr.CloneUrl.StartsWith("https://", StringComparison.OrdinalIgnoreCase))
+            {
+                return Results.Json(new { error = "repository.clone_url must be an https URL" }, statusCode: StatusCodes.Status400BadRequest);
+            }
+
             if (PullRequestEvent.RelevantActions.Contains(pr.Action))
             {
                 request = new JobRequest(pr.FullName, pr.CloneUrl, pr.InstallationId, pr.Number, pr.HeadSha, pr.BaseRef, pr.Body, Reason(pr));

@@ -12,9 +12,11 @@ public sealed class JobWorker(
     JobStore jobs,
     JobSignal signal,
     PullRequestJobProcessor processor,
+    TimeProvider time,
     SecretRedactor redactor,
     ILogger<JobWorker> logger) : BackgroundService
 {
+    private static readonly TimeSpan MinWait = TimeSpan.FromMilliseconds(50);
     private readonly string instance = $"{Environment.MachineName}:{Environment.ProcessId}:{Guid.NewGuid():N}";
 
     protected override Task ExecuteAsync(CancellationToken stoppingToken) =>
@@ -30,7 +32,7 @@ public sealed class JobWorker(
                 var job = await jobs.ClaimAsync(owner, settings.Lease, stoppingToken).ConfigureAwait(false);
                 if (job is null)
                 {
-                    await signal.WaitAsync(settings.Poll, stoppingToken).ConfigureAwait(false);
+                    await signal.WaitAsync(IdleWait(), stoppingToken).ConfigureAwait(false);
                     continue;
                 }
 
@@ -49,6 +51,18 @@ public sealed class JobWorker(
                 await Task.Delay(settings.Poll, stoppingToken).ConfigureAwait(false);
             }
         }
+    }
+
+    /// <summary>Until the next queued job is due (its quiet period or retry delay ends), at most the poll interval.</summary>
+    private TimeSpan IdleWait()
+    {
+        if (jobs.NextDue() is not { } due)
+        {
+            return settings.Poll;
+        }
+
+        var wait = due - time.GetUtcNow();
+        return wait < MinWait ? MinWait : wait > settings.Poll ? settings.Poll : wait;
     }
 
     private async Task RunAsync(Job job, string owner, CancellationToken stoppingToken)

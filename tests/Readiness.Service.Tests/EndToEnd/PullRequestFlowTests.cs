@@ -151,6 +151,15 @@ public sealed class PullRequestFlowTests : ServiceTestBase
     }
 
     [Fact]
+    public async Task LocalCloneUrl_IsRefused_UnlessAllowed()
+    {
+        var strict = StartHost(new Dictionary<string, string?> { ["Readiness:AllowNonHttpsCloneUrls"] = "false" });
+        var answer = await strict.DeliverAsync(Repo.Payload("opened", 1, Repo.Work.Sha(ReleasePullRequestRepository.PullRequestBranch)), "delivery-1");
+        Assert.Equal(HttpStatusCode.BadRequest, answer.StatusCode);
+        Assert.Empty(strict.Jobs.CountByState());
+    }
+
+    [Fact]
     public async Task ClosedOrUnassignedActions_AreIgnored()
     {
         var head = Repo.Work.Sha(ReleasePullRequestRepository.PullRequestBranch);

@@ -106,6 +106,21 @@ public sealed class JobStoreTests : IDisposable
     }
 
     [Fact]
+    public async Task QuietPeriod_DelaysTheJobUntilEventsStop()
+    {
+        var quiet = new JobStore(database, time, TimeSpan.FromSeconds(2));
+        await quiet.RecordDeliveryAsync("d-1", "pull_request", Request(1, "a"), default);
+        time.Advance(TimeSpan.FromSeconds(1.5));
+        await quiet.RecordDeliveryAsync("d-2", "pull_request", Request(1, "b"), default);
+        time.Advance(TimeSpan.FromSeconds(1.5));
+        Assert.Null(await quiet.ClaimAsync("w1", Lease, default));
+        Assert.Equal(time.GetUtcNow() + TimeSpan.FromSeconds(0.5), quiet.NextDue());
+        time.Advance(TimeSpan.FromSeconds(0.5));
+        var job = await quiet.ClaimAsync("w1", Lease, default);
+        Assert.Equal(Sha("b"), job?.Request.HeadSha);
+    }
+
+    [Fact]
     public async Task IgnoredEvent_IsRememberedButQueuesNothing()
     {
         var first = await jobs.RecordDeliveryAsync("d-9", "push", null, default);
