@@ -71,11 +71,11 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
     /// <summary>The registry for a run: <paramref name="explicitSource"/>, else <c>publish-to</c>, else the public feed.</summary>
     public RegistrySelector RegistriesFor(string? explicitSource, TimeSpan timeout, bool noCache)
     {
-        var registryOptions = new RegistryOptions { Timeout = timeout, NoCache = noCache };
         return config =>
         {
             var source = RegistryFactory.ChooseSource(explicitSource, config);
             var local = source.Contains("://", StringComparison.Ordinal) ? source : console.FullPath(source);
+            var registryOptions = new RegistryOptions { Timeout = timeout, NoCache = noCache, AskOwners = config.GetList("owners").Count > 0 };
             return RegistryFactory.Create(local, registryOptions);
         };
     }

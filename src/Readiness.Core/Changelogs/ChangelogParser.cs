@@ -12,7 +12,7 @@ namespace Readiness.Core.Changelogs;
 
 /// <summary>
 /// Reads a Markdown changelog into release sections, with Markdig (CommonMark: headings inside code blocks are not
-/// headings; ATX and setext headings both count; any input parses).
+/// headings; ATX and setext headings both count).
 /// </summary>
 /// <remarks>
 /// Release headings accepted (Keep a Changelog 1.1.0 is the reference; https://keepachangelog.com/en/1.1.0/):
@@ -46,10 +46,35 @@ public static partial class ChangelogParser
     [GeneratedRegex(@"^[0-9]{4}-[0-9]{2}-[0-9]{2}$", RegexOptions.CultureInvariant)]
     private static partial Regex IsoDate();
 
-    public static ChangelogDocument Parse(string text)
+    /// <summary>Parses <paramref name="text"/>; throws <see cref="InvalidDataException"/> when Markdig refuses it.</summary>
+    public static ChangelogDocument Parse(string text) =>
+        TryParse(text, out var document, out var error) ? document! : throw new InvalidDataException(error);
+
+    /// <summary>
+    /// Parses <paramref name="text"/>, or says why not: Markdig refuses input nested deeper than its depth limit
+    /// (thousands of '&gt;', '[' or list levels) with an <see cref="ArgumentException"/> (seen with Markdig 1.6.0).
+    /// </summary>
+    public static bool TryParse(string text, out ChangelogDocument? changelog, out string? error)
     {
         ArgumentNullException.ThrowIfNull(text);
-        var document = Markdown.Parse(text.TrimStart('\uFEFF'), Pipeline);
+        MarkdownDocument document;
+        try
+        {
+            document = Markdown.Parse(text.TrimStart('\uFEFF'), Pipeline);
+        }
+        catch (ArgumentException e)
+        {
+            (changelog, error) = (null, $"Markdown could not be parsed: {e.Message}");
+            return false;
+        }
+
+        changelog = FromDocument(document);
+        error = null;
+        return true;
+    }
+
+    private static ChangelogDocument FromDocument(MarkdownDocument document)
+    {
         var links = new List<ChangelogLink>();
         var blocks = new List<Block>();
         foreach (var block in document)

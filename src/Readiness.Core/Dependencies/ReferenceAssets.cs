@@ -4,25 +4,27 @@ namespace Readiness.Core.Dependencies;
 
 /// <summary>
 /// What a reference passes on to the package's consumers, computed from its <c>IncludeAssets</c>,
-/// <c>ExcludeAssets</c> and <c>PrivateAssets</c> metadata the way <c>dotnet pack</c> does (standards.md §5):
-/// the assets used are IncludeAssets minus ExcludeAssets; those that flow to consumers are the used ones minus
-/// PrivateAssets. Nothing flows: the dependency is left out of the nuspec. Runtime does not flow: the nuspec
-/// dependency excludes <c>Runtime</c>. Either way the reference is compile-only for consumers.
+/// <c>ExcludeAssets</c> and <c>PrivateAssets</c> metadata the way <c>dotnet pack</c> writes the nuspec (standards.md
+/// §5, and confirmed form by form against dotnet pack in the tests): the assets used are IncludeAssets minus
+/// ExcludeAssets; when nothing used is left once PrivateAssets is taken away, the dependency is left out of the
+/// nuspec; otherwise it is written with <c>exclude</c> holding every asset not used, so consumers get no runtime
+/// asset exactly when <c>runtime</c> is not used. PrivateAssets short of everything does not keep runtime assets
+/// from consumers (PrivateAssets="runtime" packs a dependency with no exclude at all).
 /// </summary>
-/// <param name="Used">Assets the project itself consumes.</param>
-/// <param name="Flowing">Assets that reach the package's consumers.</param>
+/// <param name="Used">Assets the project itself consumes (IncludeAssets minus ExcludeAssets).</param>
+/// <param name="Private">PrivateAssets (default contentfiles;analyzers;build).</param>
 /// <param name="Unevaluated">Why the metadata could not be read with certainty (an unknown word, an unexpanded
 /// property), or null.</param>
-public sealed record ReferenceAssets(AssetFlags Used, AssetFlags Flowing, string? Unevaluated)
+public sealed record ReferenceAssets(AssetFlags Used, AssetFlags Private, string? Unevaluated)
 {
     /// <summary>PrivateAssets when none is written: contentfiles;analyzers;build (NuGet documentation, as above).</summary>
     public const AssetFlags DefaultPrivate = AssetFlags.ContentFiles | AssetFlags.Analyzers | AssetFlags.Build;
 
     /// <summary>The dependency is left out of the package's dependencies altogether.</summary>
-    public bool IsOmitted => Flowing == AssetFlags.None;
+    public bool IsOmitted => (Used & ~Private) == AssetFlags.None;
 
     /// <summary>Consumers get no runtime asset from this reference: omitted, or present with <c>exclude</c> holding Runtime.</summary>
-    public bool IsCompileOnly => (Flowing & AssetFlags.Runtime) == 0;
+    public bool IsCompileOnly => IsOmitted || (Used & AssetFlags.Runtime) == 0;
 
     /// <summary>Reads the three metadata values; lookups are case-insensitive, values are <c>;</c> lists.</summary>
     public static ReferenceAssets From(IReadOnlyDictionary<string, string> metadata)
@@ -32,8 +34,7 @@ public sealed record ReferenceAssets(AssetFlags Used, AssetFlags Flowing, string
         var include = Parse(Find(metadata, "IncludeAssets"), AssetFlags.All, "IncludeAssets", problems);
         var exclude = Parse(Find(metadata, "ExcludeAssets"), AssetFlags.None, "ExcludeAssets", problems);
         var privateAssets = Parse(Find(metadata, "PrivateAssets"), DefaultPrivate, "PrivateAssets", problems);
-        var used = include & ~exclude;
-        return new ReferenceAssets(used, used & ~privateAssets, problems.Count == 0 ? null : string.Join("; ", problems));
+        return new ReferenceAssets(include & ~exclude, privateAssets, problems.Count == 0 ? null : string.Join("; ", problems));
     }
 
     /// <summary>Case-insensitive metadata lookup (MSBuild metadata names are case-insensitive).</summary>

@@ -69,7 +69,7 @@ public static class SecretScanner
         ArgumentNullException.ThrowIfNull(content);
         foreach (var shape in SecretShapes.All)
         {
-            if (!content.Contains(shape.Prefix, StringComparison.Ordinal))
+            if (!shape.Prefixes.Any(p => content.Contains(p, StringComparison.Ordinal)))
             {
                 continue;
             }

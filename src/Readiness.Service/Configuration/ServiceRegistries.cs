@@ -24,15 +24,19 @@ public static class ServiceRegistries
 
         if (settings.Registry is { } configured)
         {
-            return _ => RegistryFactory.Create(configured, options);
+            return config => RegistryFactory.Create(configured, WithOwners(options, config));
         }
 
         return config =>
         {
             var source = RegistryFactory.ChooseSource(null, config);
             return Uri.TryCreate(source, UriKind.Absolute, out var uri) && uri.Scheme == Uri.UriSchemeHttps
-                ? RegistryFactory.Create(source, options)
+                ? RegistryFactory.Create(source, WithOwners(options, config))
                 : null;
         };
     }
+
+    // The owners lookup (the feed's search service) is asked only when the configuration names owners to match.
+    private static RegistryOptions WithOwners(RegistryOptions options, Core.Configuration.RepositoryConfig config) =>
+        options with { AskOwners = config.GetList("owners").Count > 0 };
 }

@@ -198,6 +198,18 @@ public sealed class ChangelogParserTests
         Assert.Null(document.SectionLevel);
     }
 
+    [Fact]
+    public void NestingBeyondMarkdigsDepthLimit_IsRefusedWithAReason()
+    {
+        // Markdig 1.6.0 throws ArgumentException past its depth limit (seen on this machine); the parser reports it.
+        var nested = new string('>', 2_000) + " ## [1.0.0] - 2026-01-05\n";
+
+        Assert.False(ChangelogParser.TryParse(nested, out var document, out var error));
+        Assert.Null(document);
+        Assert.Contains("nested", error, StringComparison.Ordinal);
+        Assert.Throws<InvalidDataException>(() => ChangelogParser.Parse(nested));
+    }
+
     private static string Describe(ChangelogSection? section) => section switch
     {
         null => "none",

@@ -19,7 +19,7 @@ public sealed class ReferenceAssetsTests
     [InlineData("ExcludeAssets", "all", true, true)]
     [InlineData("IncludeAssets", "compile", false, true)]
     [InlineData("IncludeAssets", "none", true, true)]
-    [InlineData("PrivateAssets", "runtime", false, true)]
+    [InlineData("PrivateAssets", "runtime", false, false)] // dotnet pack writes the dependency with no exclude at all
     [InlineData("ExcludeAssets", "build;analyzers", false, false)]
     [InlineData("PrivateAssets", "contentfiles;analyzers;build", false, false)]
     [InlineData("IncludeAssets", "compile;runtime", false, false)]
@@ -38,7 +38,8 @@ public sealed class ReferenceAssetsTests
         var assets = ReferenceAssets.From(ProjectFixtures.Meta());
 
         Assert.False(assets.IsCompileOnly);
-        Assert.Equal(AssetFlags.All & ~ReferenceAssets.DefaultPrivate, assets.Flowing);
+        Assert.Equal(AssetFlags.All, assets.Used);
+        Assert.Equal(ReferenceAssets.DefaultPrivate, assets.Private);
     }
 
     [Fact]

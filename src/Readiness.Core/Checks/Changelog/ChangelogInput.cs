@@ -44,6 +44,11 @@ internal sealed record ChangelogInput(ChangelogTarget Target, string Path, strin
             return (null, Finding.Skip($"{path} could not be read at the inspected commit.", target.Package, new Evidence(path)));
         }
 
-        return (new ChangelogInput(target, path, versionText, version, ChangelogParser.Parse(text)), null);
+        if (!ChangelogParser.TryParse(text, out var document, out var error))
+        {
+            return (null, Finding.Error($"{path}: {error}", target.Package, new Evidence(path)));
+        }
+
+        return (new ChangelogInput(target, path, versionText, version, document!), null);
     }
 }

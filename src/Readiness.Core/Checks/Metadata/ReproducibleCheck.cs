@@ -24,18 +24,57 @@ public sealed class ReproducibleCheck : ICheck
         ArgumentNullException.ThrowIfNull(context);
         foreach (var project in context.Projects.Packable)
         {
-            yield return Judge(project);
+            yield return Judge(project, context.Snapshot.Files);
         }
     }
 
-    private Finding Judge(ProjectInfo project)
+    /// <summary>
+    /// Where a file the project reads declares <c>ContinuousIntegrationBuild</c>, even under a condition the static
+    /// read took as false (conditions on CI variables such as <c>$(GITHUB_ACTIONS)</c>, which no file sets).
+    /// </summary>
+    public static SourceLocation? ConditionalDeclaration(ProjectInfo project, Snapshots.IFileTree files)
+    {
+        ArgumentNullException.ThrowIfNull(project);
+        ArgumentNullException.ThrowIfNull(files);
+        foreach (var file in project.Imports.Prepend(project.Path).Distinct(StringComparer.Ordinal))
+        {
+            string? text;
+            try
+            {
+                text = Snapshots.FileTreeExtensions.ReadText(files, file);
+            }
+            catch (Snapshots.FileTooLargeException)
+            {
+                continue;
+            }
+
+            var lines = text?.Split('\n') ?? [];
+            for (var i = 0; i < lines.Length; i++)
+            {
+                if (lines[i].Contains("<ContinuousIntegrationBuild", StringComparison.OrdinalIgnoreCase))
+                {
+                    return new SourceLocation(file, i + 1);
+                }
+            }
+        }
+
+        return null;
+    }
+
+    private Finding Judge(ProjectInfo project, Snapshots.IFileTree files)
     {
         var problems = new List<string>();
         var notes = new List<string>();
         var evidence = new List<Evidence>();
 
         var ci = project.Property("ContinuousIntegrationBuild");
-        if (ci is null)
+        if (ci is null && ConditionalDeclaration(project, files) is { } declared)
+        {
+            evidence.Add(new Evidence(declared.Path, declared.Line));
+            notes.Add($"ContinuousIntegrationBuild is declared at {declared} under a condition that holds only in some "
+                + "builds (such as a CI variable no file sets); it was not evaluated");
+        }
+        else if (ci is null)
         {
             problems.Add("ContinuousIntegrationBuild is never set (paths in the PDBs stay machine-specific)");
         }

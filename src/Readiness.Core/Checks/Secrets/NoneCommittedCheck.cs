@@ -53,6 +53,13 @@ public sealed class NoneCommittedCheck : ICheck
                 evidence);
         }
 
+        var flagged = result.Hits.Select(h => h.Path).Distinct(StringComparer.Ordinal).Count();
+        var clean = result.TextFiles + result.BinaryFiles - flagged;
+        if (clean > 0)
+        {
+            yield return Finding.Pass($"The other {clean} tracked files hold no secret.");
+        }
+
         if (extra.Length > 0)
         {
             yield return Finding.Skip("Not every file could be scanned:" + extra);

@@ -24,8 +24,7 @@ internal static class ChangelogFixtures
         return TestSnapshots.Context(TestSnapshots.Snapshot(files, tagInfo), projects, version, config, with);
     }
 
-    public static IReadOnlyDictionary<string, ConfigNode> With(string name, string value) =>
-        new Dictionary<string, ConfigNode> { [name] = new ConfigScalar(value, new ConfigMark("checklist.yml", 1, 1)) };
+    public static IReadOnlyDictionary<string, ConfigNode> With(string name, string value) => CheckHarness.With($"{name}: {value}\n");
 
     public static RepositoryConfig PerPackageTags { get; } = RepositoryConfig.Empty with { TagPattern = "{id}/v{version}" };
 

@@ -224,6 +224,15 @@ public sealed class ChangelogHasEntryCheckTests
     }
 
     [Fact]
+    public void ChangelogMarkdigRefuses_IsAnErrorNamingTheFile()
+    {
+        var finding = Assert.Single(check.Run(Context(Tree(new string('[', 100_000)))));
+
+        Assert.Equal(CheckStatus.Error, finding.Status);
+        Assert.StartsWith("CHANGELOG.md: Markdown could not be parsed", finding.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void PerPackageTag_UsesThatPackagesChangelog()
     {
         var files = new InMemoryFileTree()

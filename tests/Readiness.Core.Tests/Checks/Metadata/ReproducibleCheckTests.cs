@@ -65,3 +65,23 @@ public sealed class ReproducibleCheckTests
         AssertStatus(CheckStatus.Pass, Single(Run(new ReproducibleCheck(), ProjectFixtures.Model(project))));
     }
 }
+
+/// <summary>The check over projects read by the static reader, for the CI-conditioned forms written in practice.</summary>
+public sealed class ReproducibleCheckReaderTests
+{
+    [Theory]
+    [InlineData("<PropertyGroup Condition=\"'$(GITHUB_ACTIONS)' == 'true'\">\n    <ContinuousIntegrationBuild>true</ContinuousIntegrationBuild>\n  </PropertyGroup>")]
+    [InlineData("<PropertyGroup>\n    <ContinuousIntegrationBuild Condition=\"'$(TF_BUILD)' == 'true'\">true</ContinuousIntegrationBuild>\n  </PropertyGroup>")]
+    public void CiConditionedProperty_PassesWithNote(string group)
+    {
+        var files = new InMemoryFileTree()
+            .Add("Directory.Build.props", $"<Project>\n  {group}\n  <PropertyGroup>\n    <PublishRepositoryUrl>true</PublishRepositoryUrl>\n    <IncludeSymbols>true</IncludeSymbols>\n    <SymbolPackageFormat>snupkg</SymbolPackageFormat>\n  </PropertyGroup>\n</Project>\n")
+            .Add("src/Bramble.Sketches/Bramble.Sketches.csproj", "<Project Sdk=\"Microsoft.NET.Sdk\">\n  <PropertyGroup>\n    <TargetFramework>net10.0</TargetFramework>\n  </PropertyGroup>\n</Project>\n");
+        var model = new Core.Projects.MsBuild.StaticProjectReader().Read(files);
+
+        var finding = Single(Run(new ReproducibleCheck(), model, files));
+
+        AssertStatus(CheckStatus.Pass, finding);
+        Assert.Contains("Directory.Build.props:", string.Join(" ", EvidenceText(finding)), StringComparison.Ordinal);
+    }
+}
