@@ -34,9 +34,6 @@ public sealed class AppInstallationCredentials : IForgeCredentials, IDisposable
         key.ImportFromPem(settings.AppPrivateKeyPem);
     }
 
-    /// <summary>How many tokens were asked for (for tests and figures).</summary>
-    public int TokensIssued { get; private set; }
-
     public async Task<string> TokenAsync(long? installationId, CancellationToken cancellationToken)
     {
         if (installationId is not { } id)
@@ -65,7 +62,6 @@ public sealed class AppInstallationCredentials : IForgeCredentials, IDisposable
                 cancellationToken).ConfigureAwait(false);
             redactor.Add(issued.Token);
             cache[id] = (issued.Token, issued.ExpiresAt);
-            TokensIssued++;
             return issued.Token;
         }
         finally
