@@ -18,7 +18,6 @@ public static class VersionSourceDetector
         "GitVersionTask",
         "Versionize",
         "GitInfo",
-        "DotNet.ReproducibleBuilds.Isolated",
     ];
 
     /// <summary>Placeholder versions that mean "the real one is passed at build time" (common practice, no published source).</summary>
@@ -29,8 +28,7 @@ public static class VersionSourceDetector
     {
         ArgumentNullException.ThrowIfNull(project);
         ArgumentNullException.ThrowIfNull(files);
-        var package = project.PackageReferences.FirstOrDefault(r =>
-            GitVersioningPackages.Contains(r.Id, StringComparer.OrdinalIgnoreCase) && r.Id != "DotNet.ReproducibleBuilds.Isolated");
+        var package = project.PackageReferences.FirstOrDefault(r => GitVersioningPackages.Contains(r.Id, StringComparer.OrdinalIgnoreCase));
         if (package is not null)
         {
             return $"the version is computed from git tags by the {package.Id} package ({package.Location})";
