@@ -5,8 +5,9 @@ using Readiness.Testing;
 namespace Readiness.Bench;
 
 /// <summary>
-/// Time of <c>git push</c> of an ordinary branch to a local bare remote with and without the hook (interleaved, median
-/// of many runs), and of a release-tag push of the demo repository (offline registry).
+/// Time of <c>git push</c> of an ordinary branch to a local bare remote without a hook, with an empty hook (the floor any
+/// pre-push hook pays: git starting <c>/bin/sh</c>) and with the Readiness hook (interleaved, median of many runs), and of
+/// a release-tag push of the demo repository (offline registry).
 /// </summary>
 [System.Runtime.Versioning.UnsupportedOSPlatform("windows")]
 public sealed class HookPushBench : IBench
@@ -19,19 +20,24 @@ public sealed class HookPushBench : IBench
     {
         var runs = args.Length > 0 ? int.Parse(args[0], System.Globalization.CultureInfo.InvariantCulture) : 30;
         using var plain = SampleLibrary.ReadyRelease();
+        using var empty = SampleLibrary.ReadyRelease();
         using var hooked = SampleLibrary.ReadyRelease();
         using var plainRemote = TestRepository.Bare();
+        using var emptyRemote = TestRepository.Bare();
         using var hookedRemote = TestRepository.Bare();
         plain.Git("remote", "add", "origin", plainRemote.Path);
+        empty.Git("remote", "add", "origin", emptyRemote.Path);
         hooked.Git("remote", "add", "origin", hookedRemote.Path);
+        WriteEmptyHook(empty.GitDirectory);
         await InstallAsync(hooked.Path, cancellationToken);
 
         var without = new List<double>();
+        var floor = new List<double>();
         var with = new List<double>();
         var env = new Dictionary<string, string> { ["READINESS_OFFLINE"] = "1" };
         for (var i = 0; i < runs; i++)
         {
-            foreach (var (repo, samples) in new[] { (plain, without), (hooked, with) })
+            foreach (var (repo, samples) in new[] { (plain, without), (empty, floor), (hooked, with) })
             {
                 repo.Write("notes.txt", $"run {i}\n").Commit($"Note {i}");
                 var watch = System.Diagnostics.Stopwatch.StartNew();
@@ -41,8 +47,11 @@ public sealed class HookPushBench : IBench
         }
 
         Console.WriteLine($"branch push without hook: {Stats.Describe(without)}");
+        Console.WriteLine($"branch push, empty hook:  {Stats.Describe(floor)}");
         Console.WriteLine($"branch push with hook:    {Stats.Describe(with)}");
-        Console.WriteLine($"added by the hook (median): {Stats.Percentile(with, 0.5) - Stats.Percentile(without, 0.5):0.0} ms");
+        var median = Stats.Percentile(without, 0.5);
+        Console.WriteLine($"added by an empty hook (median): {Stats.Percentile(floor, 0.5) - median:0.0} ms");
+        Console.WriteLine($"added by the Readiness hook (median): {Stats.Percentile(with, 0.5) - median:0.0} ms");
 
         using var folder = new TempDirectory();
         var demo = folder.Combine("bramble-sketches");
@@ -61,6 +70,15 @@ public sealed class HookPushBench : IBench
         var command = prefix.Length == 0 ? file : WriteLauncher(repository, file, prefix);
         var console = new CliConsole(TextWriter.Null, Console.Error, false, new Dictionary<string, string> { ["READINESS_COMMAND"] = command }, repository, TextReader.Null);
         await new CliApp(console, TimeProvider.System).RunAsync(["hook", "install"], cancellationToken);
+    }
+
+    /// <summary>The cheapest hook git can run: it starts <c>/bin/sh</c>, which exits at once.</summary>
+    private static void WriteEmptyHook(string gitDirectory)
+    {
+        var hook = Path.Combine(gitDirectory, "hooks", "pre-push");
+        Directory.CreateDirectory(Path.GetDirectoryName(hook)!);
+        File.WriteAllText(hook, "#!/bin/sh\nexit 0\n");
+        File.SetUnixFileMode(hook, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
     }
 
     private static string WriteLauncher(string repository, string file, string[] prefix)
