@@ -10,6 +10,7 @@ namespace Readiness.Cli.Hooks;
 /// <summary>
 /// <c>readiness hook pre-push REMOTE URL</c>: checks every release tag (and release branch) being pushed, at the
 /// pushed commit, and blocks the push when a blocking check fails. Output is compact: a line per ref, then failures.
+/// Each checked ref is recorded with the organisation's service when one is configured (<see cref="RunRecorder"/>).
 /// </summary>
 public sealed class PrePushRunner(Composition composition, CliConsole console)
 {
@@ -35,6 +36,7 @@ public sealed class PrePushRunner(Composition composition, CliConsole console)
         }
 
         var repository = console.CurrentDirectory;
+        using var recorder = new RunRecorder(console, repository);
         var blocked = false;
         foreach (var pushed in refs.Where(r => !r.IsDelete))
         {
@@ -55,6 +57,9 @@ public sealed class PrePushRunner(Composition composition, CliConsole console)
             {
                 LogWaivers(repository, pushed, remote, url, waived, waivers);
             }
+
+            var sent = waived.Select(w => w.Check).Distinct(StringComparer.Ordinal).Select(c => KeyValuePair.Create(c, waivers.Reasons[c])).ToList();
+            await recorder.RecordAsync(url, report, sent, cancellationToken).ConfigureAwait(false);
         }
 
         if (blocked)
