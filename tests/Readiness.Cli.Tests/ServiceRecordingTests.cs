@@ -157,7 +157,7 @@ public sealed class ServiceRecordingTests : IDisposable
     }
 
     [Fact]
-    public async Task ServiceThatNeverAnswers_IsGivenUpOnWithinTheBound_AndTheVerdictStands()
+    public async Task ServiceThatNeverAnswers_IsGivenUpOnOncePerPush_AndTheVerdictStands()
     {
         // A listening socket that never accepts: the kernel completes the TCP handshake, nobody answers.
         var silent = new TcpListener(IPAddress.Loopback, 0);
@@ -170,11 +170,24 @@ public sealed class ServiceRecordingTests : IDisposable
             {
                 [ServiceRecording.UrlVariable] = $"http://127.0.0.1:{port}/",
                 [ServiceRecording.TokenVariable] = Token,
-            });
+            },
+            refs: 3);
             clock.Stop();
             Assert.Equal(0, exit);
-            Assert.Contains($"readiness: could not record the run with http://127.0.0.1:{port}: no answer within 3 s", error, StringComparison.Ordinal);
+            Assert.Equal(3, Lines(error).Count(l => l.Contains("READY", StringComparison.Ordinal)));
+
+            // Three release refs, one attempt: after the first failure the other refs of the push are not tried.
+            var failure = Assert.Single(Lines(error), l => l.Contains("record", StringComparison.Ordinal));
+            Assert.Equal($"readiness: could not record the run with http://127.0.0.1:{port}: no answer within 3 s", failure);
             Assert.InRange(clock.Elapsed, RunRecorder.Timeout, RunRecorder.Timeout + TimeSpan.FromSeconds(20));
+            var connections = 0;
+            while (silent.Pending())
+            {
+                silent.AcceptTcpClient().Dispose();
+                connections++;
+            }
+
+            Assert.Equal(1, connections);
         }
         finally
         {
@@ -194,10 +207,11 @@ public sealed class ServiceRecordingTests : IDisposable
         new(TextWriter.Null, TextWriter.Null, IsTerminal: false, env, repo.Path, new StringReader(string.Empty));
 
     /// <summary>What git runs for <c>git push origin v1.2.0</c> (githooks(5) pre-push input line), in-process.</summary>
-    private Task<(int Exit, string Out, string Error)> PrePushAsync(Dictionary<string, string> env)
+    private Task<(int Exit, string Out, string Error)> PrePushAsync(Dictionary<string, string> env, int refs = 1)
     {
         env["READINESS_OFFLINE"] = "1";
-        var input = $"refs/tags/v1.2.0 {repo.Sha("refs/tags/v1.2.0")} refs/tags/v1.2.0 {PushedRef.ZeroOid}\n";
+        var line = $"refs/tags/v1.2.0 {repo.Sha("refs/tags/v1.2.0")} refs/tags/v1.2.0 {PushedRef.ZeroOid}\n";
+        var input = string.Concat(Enumerable.Repeat(line, refs));
         return CliHarness.RunWithInputAsync(repo.Path, input, env, "hook", "pre-push", "origin", RemoteUrl);
     }
 }

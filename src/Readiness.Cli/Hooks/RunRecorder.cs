@@ -44,8 +44,14 @@ public sealed class RunRecorder(CliConsole console, string repository) : IDispos
             return;
         }
 
-        var line = await SendAsync(settings, RemoteRepositoryName.From(remoteUrl), report, waivers, cancellationToken).ConfigureAwait(false);
+        var (line, recorded) = await SendAsync(settings, RemoteRepositoryName.From(remoteUrl), report, waivers, cancellationToken).ConfigureAwait(false);
         await console.Error.WriteLineAsync(line).ConfigureAwait(false);
+        if (!recorded)
+        {
+            // One failure is enough: the other refs of this push are not tried, so a service that never answers costs
+            // one timeout per push, not one per ref.
+            problem = line;
+        }
     }
 
     public void Dispose() => client?.Dispose();
@@ -77,7 +83,7 @@ public sealed class RunRecorder(CliConsole console, string repository) : IDispos
         return Encoding.UTF8.GetString(buffer.ToArray());
     }
 
-    private async Task<string> SendAsync(ServiceRecording recording, string repositoryName, Report report, IReadOnlyList<KeyValuePair<string, string>> waivers, CancellationToken cancellationToken)
+    private async Task<(string Line, bool Recorded)> SendAsync(ServiceRecording recording, string repositoryName, Report report, IReadOnlyList<KeyValuePair<string, string>> waivers, CancellationToken cancellationToken)
     {
         var endpoint = new Uri(recording.BaseUrl + "/api/runs");
         using var limit = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
@@ -98,20 +104,20 @@ public sealed class RunRecorder(CliConsole console, string repository) : IDispos
             if (!response.IsSuccessStatusCode)
             {
                 var detail = ErrorText(answer);
-                return Failure(recording, $"the service answered {(int)response.StatusCode} {response.ReasonPhrase}{(detail is null ? string.Empty : $" ({detail})")}");
+                return (Failure(recording, $"the service answered {(int)response.StatusCode} {response.ReasonPhrase}{(detail is null ? string.Empty : $" ({detail})")}"), false);
             }
 
             return RunPath(answer) is { } path
-                ? $"readiness: recorded at {recording.Display}{path}"
-                : Failure(recording, "the answer names no run");
+                ? ($"readiness: recorded at {recording.Display}{path}", true)
+                : (Failure(recording, "the answer names no run"), false);
         }
         catch (OperationCanceledException) when (!cancellationToken.IsCancellationRequested)
         {
-            return Failure(recording, $"no answer within {Timeout.TotalSeconds:0} s");
+            return (Failure(recording, $"no answer within {Timeout.TotalSeconds:0} s"), false);
         }
         catch (Exception e) when (e is HttpRequestException or IOException or JsonException or InvalidOperationException or FormatException)
         {
-            return Failure(recording, e.Message);
+            return (Failure(recording, e.Message), false);
         }
     }
 
