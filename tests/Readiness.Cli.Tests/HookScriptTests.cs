@@ -61,15 +61,15 @@ public sealed class HookScriptTests : IDisposable
     }
 
     [Fact]
-    public void OrdinaryPush_UsesShellBuiltinsOnly_NoOtherProgramIsStarted()
+    public void OrdinaryBranchPush_UsesShellBuiltinsOnly_NoOtherProgramIsStarted()
     {
         // PATH points at an empty folder: a call to cat, sed, git or readiness would fail with "not found".
         var config = "tag-pattern: 'v{version}'\nrelease-branches:\n  - release/*\n";
-        var input = $"refs/heads/main {Oid} refs/heads/main {Zero}\nrefs/tags/nightly {Oid} refs/tags/nightly {Zero}\n";
+        var input = $"refs/heads/main {Oid} refs/heads/main {Zero}\nrefs/heads/feature/quantiles {Oid} refs/heads/feature/quantiles {Oid}\n(delete) {Zero} refs/tags/v0.9.0 {Oid}\n";
         var (exit, trace, error) = RunHook(config, input);
         Assert.Equal(0, exit);
         Assert.Equal(string.Empty, error);
-        Assert.Equal(["skip branch main", "skip tag nightly", "decision: ordinary push, .NET not started"], trace.TrimEnd('\n').Split('\n'));
+        Assert.Equal(["skip branch main", "skip branch feature/quantiles", "skip delete refs/tags/v0.9.0", "decision: ordinary push, .NET not started"], trace.TrimEnd('\n').Split('\n'));
     }
 
     [Fact]

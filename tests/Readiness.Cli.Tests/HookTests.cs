@@ -75,6 +75,28 @@ public sealed class HookTests : IDisposable
     }
 
     [Fact]
+    public async Task TagPatternOfTheTaggedCommit_IsHonoured_WhenTheWorktreeHasNoConfiguration()
+    {
+        // The engine reads .readiness.yml from the pushed commit; the shell filter must not let that tag slip through
+        // because the checked-out branch has no such file.
+        await InstallAsync();
+        var when = new DateTimeOffset(2026, 11, 26, 9, 0, 0, TimeSpan.Zero);
+        repo.Write(".readiness.yml", "tag-pattern: 'rel-{version}'\n")
+            .Write("Directory.Build.props", SampleLibrary.DirectoryBuildProps("1.3.0"))
+            .Write("CHANGELOG.md", "# Changelog\n\n## [Unreleased]\n\n### Added\n- More sketches.\n\n## [1.2.0] - 2026-11-20\n\n### Added\n- First.\n")
+            .Commit("Prepare rel-1.3.0", when);
+        repo.AnnotatedTag("rel-1.3.0", "rel-1.3.0\n", when);
+        repo.Git("rm", "-q", ".readiness.yml");
+        repo.Commit("Drop the configuration again", when);
+
+        var result = Push("origin", "rel-1.3.0");
+        Assert.False(result.Succeeded);
+        Assert.Contains("changelog.has-entry", result.StdErr, StringComparison.Ordinal);
+        Assert.Contains("release tag rel-1.3.0 (pattern of the tagged commit)", File.ReadAllText(Trace), StringComparison.Ordinal);
+        Assert.Equal(string.Empty, RemoteTags().Trim());
+    }
+
+    [Fact]
     public async Task ReadyTag_IsAccepted()
     {
         await InstallAsync();
