@@ -41,6 +41,9 @@ public sealed record ProjectInfo(
     public bool IsPackable =>
         !IsTestProject && !string.Equals(Value("IsPackable"), "false", StringComparison.OrdinalIgnoreCase);
 
+    /// <summary>A .NET tool (PackAsTool=true): its package carries the whole program and declares no dependencies.</summary>
+    public bool IsTool => string.Equals(Value("PackAsTool"), "true", StringComparison.OrdinalIgnoreCase);
+
     /// <summary>TargetFrameworks (split on ';') or TargetFramework.</summary>
     public IReadOnlyList<string> TargetFrameworks =>
         (Value("TargetFrameworks") ?? Value("TargetFramework") ?? string.Empty)

@@ -38,6 +38,17 @@ public sealed class PackableReferencesCheck : ICheck
 
     private Finding Judge(ProjectInfo project, ProjectModel model)
     {
+        if (project.IsTool)
+        {
+            // A tool package holds the program's whole publish output and no dependency group: referenced projects
+            // ship inside it whether they are packable or not (see the nuspec check in ToolPackageTests).
+            var at = project.Property("PackAsTool")!.Location;
+            return Finding.Pass(
+                $"{project.PackageId} is a .NET tool (PackAsTool at {at}): its {project.ProjectReferences.Count} project reference(s) ship inside the package.",
+                project.PackageId,
+                new Evidence(at.Path, at.Line));
+        }
+
         var problems = new List<string>();
         var evidence = new List<Evidence>();
         var fine = new List<string>();

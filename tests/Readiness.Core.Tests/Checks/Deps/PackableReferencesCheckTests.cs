@@ -42,6 +42,23 @@ public sealed class PackableReferencesCheckTests
     }
 
     [Fact]
+    public void ToolReferencingANonPackableProject_Passes_NamingPackAsTool()
+    {
+        // dotnet pack of a PackAsTool project writes no dependency for its project references; they ship inside the
+        // package (asserted on the real package of our own CLI in Readiness.Cli.Tests' ToolPackageTests).
+        var internalProject = ProjectFixtures.Project(Internal).Property("IsPackable", "false").Build();
+        var builder = ProjectFixtures.Project("src/Bramble.Tool/Bramble.Tool.csproj");
+        var packAsToolAt = builder.Next();
+        var tool = builder.Property("PackAsTool", "true", packAsToolAt).ProjectReference(Internal).Build();
+
+        var finding = Single(Run(new PackableReferencesCheck(), ProjectFixtures.Model(tool, internalProject)));
+
+        AssertStatus(CheckStatus.Pass, finding);
+        Assert.Contains(packAsToolAt.ToString(), EvidenceText(finding));
+        Assert.Contains(".NET tool", finding.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void PrivateReferenceToNonPackableProject_Passes()
     {
         var internalProject = ProjectFixtures.Project(Internal).Property("IsPackable", "false").Build();
