@@ -92,12 +92,13 @@ public sealed class ToolPackageTests : IDisposable
 
     private void Dotnet(string directory, params string[] args)
     {
-        var host = Environment.GetEnvironmentVariable("DOTNET_HOST_PATH") is { Length: > 0 } path && File.Exists(path) ? path : "dotnet";
-        var (exit, output, error) = Run(host, directory, args);
-        Assert.True(exit == 0, $"dotnet {string.Join(' ', args)} failed ({exit}):\n{output}\n{error}");
+        // A private package cache for the install: an earlier run's package of the same version must not be reused.
+        var environment = args[0] == "tool" ? new Dictionary<string, string> { ["NUGET_PACKAGES"] = scratch.Combine("packages") } : null;
+        var result = DotnetCli.Run(directory, args, environment);
+        Assert.True(result.Succeeded, $"dotnet {string.Join(' ', args)} failed ({result.ExitCode}):\n{result.Log}");
     }
 
-    private (int Exit, string Out, string Error) Run(string program, string directory, params string[] args)
+    private static (int Exit, string Out, string Error) Run(string program, string directory, params string[] args)
     {
         var info = new ProcessStartInfo(program) { WorkingDirectory = directory, RedirectStandardOutput = true, RedirectStandardError = true };
         foreach (var a in args)
@@ -105,14 +106,6 @@ public sealed class ToolPackageTests : IDisposable
             info.ArgumentList.Add(a);
         }
 
-        if (args.Length > 1 && args[0] == "tool")
-        {
-            // A private package cache: an earlier run's package of the same version must not be reused.
-            info.Environment["NUGET_PACKAGES"] = scratch.Combine("packages");
-        }
-
-        info.Environment["DOTNET_CLI_TELEMETRY_OPTOUT"] = "1";
-        info.Environment["DOTNET_NOLOGO"] = "1";
         info.Environment["NO_COLOR"] = "1";
         using var process = Process.Start(info)!;
         var output = process.StandardOutput.ReadToEndAsync();

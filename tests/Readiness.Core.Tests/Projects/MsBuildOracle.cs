@@ -1,5 +1,5 @@
-using System.Diagnostics;
 using System.Text.Json;
+using Readiness.Testing;
 
 namespace Readiness.Core.Tests.Projects;
 
@@ -24,64 +24,19 @@ internal static class MsBuildOracle
         IEnumerable<string> extraProperties,
         IReadOnlyDictionary<string, string>? environment = null)
     {
-        var start = new ProcessStartInfo(DotnetHost())
-        {
-            RedirectStandardOutput = true,
-            RedirectStandardError = true,
-            UseShellExecute = false,
-            WorkingDirectory = Path.GetDirectoryName(projectFullPath)!,
-        };
-        start.ArgumentList.Add("msbuild");
-        start.ArgumentList.Add(projectFullPath);
-        start.ArgumentList.Add("-nologo");
-        start.ArgumentList.Add("-nodeReuse:false");
-        foreach (var property in StandardProperties.Concat(extraProperties).Distinct(StringComparer.OrdinalIgnoreCase))
-        {
-            start.ArgumentList.Add("-getProperty:" + property);
-        }
-
-        foreach (var type in ItemTypes)
-        {
-            start.ArgumentList.Add("-getItem:" + type);
-        }
-
+        var args = new List<string> { "msbuild", projectFullPath, "-nologo", "-nodeReuse:false" };
+        args.AddRange(StandardProperties.Concat(extraProperties).Distinct(StringComparer.OrdinalIgnoreCase).Select(p => "-getProperty:" + p));
+        args.AddRange(ItemTypes.Select(t => "-getItem:" + t));
         if (targetFramework is not null)
         {
-            start.ArgumentList.Add("-p:TargetFramework=" + targetFramework);
+            args.Add("-p:TargetFramework=" + targetFramework);
         }
 
-        start.Environment.Clear();
-        foreach (var name in new[] { "PATH", "HOME", "DOTNET_ROOT", "TMPDIR", "LANG", "SystemRoot", "USERPROFILE", "TEMP", "TMP" })
+        var result = DotnetCli.Run(Path.GetDirectoryName(projectFullPath)!, args, environment, cleanEnvironment: true, TimeSpan.FromMinutes(2));
+        var output = result.StdOut;
+        if (!result.Succeeded)
         {
-            if (Environment.GetEnvironmentVariable(name) is { } value)
-            {
-                start.Environment[name] = value;
-            }
-        }
-
-        start.Environment["DOTNET_CLI_TELEMETRY_OPTOUT"] = "1";
-        start.Environment["DOTNET_NOLOGO"] = "1";
-        start.Environment["DOTNET_SKIP_FIRST_TIME_EXPERIENCE"] = "1";
-        start.Environment["MSBUILDDISABLENODEREUSE"] = "1";
-        start.Environment["DOTNET_CLI_USE_MSBUILD_SERVER"] = "0";
-        foreach (var (name, value) in environment ?? new Dictionary<string, string>())
-        {
-            start.Environment[name] = value;
-        }
-
-        using var process = Process.Start(start) ?? throw new InvalidOperationException("dotnet could not be started");
-        var stdout = process.StandardOutput.ReadToEndAsync();
-        var stderr = process.StandardError.ReadToEndAsync();
-        if (!process.WaitForExit(TimeSpan.FromMinutes(2)))
-        {
-            process.Kill(entireProcessTree: true);
-            throw new TimeoutException("dotnet msbuild did not finish in 2 minutes");
-        }
-
-        var output = stdout.Result;
-        if (process.ExitCode != 0)
-        {
-            throw new InvalidOperationException($"dotnet msbuild failed ({process.ExitCode}):\n{output}\n{stderr.Result}");
+            throw new InvalidOperationException($"dotnet msbuild failed ({result.ExitCode}):\n{output}\n{result.StdErr}");
         }
 
         return Parse(output);
@@ -113,7 +68,4 @@ internal static class MsBuildOracle
 
         return new MsBuildResult(properties, items, json);
     }
-
-    private static string DotnetHost() =>
-        Environment.GetEnvironmentVariable("DOTNET_HOST_PATH") is { Length: > 0 } host && File.Exists(host) ? host : "dotnet";
 }

@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using System.IO.Compression;
 using System.Xml.Linq;
 using NuGet.Packaging;
@@ -137,27 +136,7 @@ public sealed class PackOracle : IDisposable
 
     private (int Exit, string Log) Dotnet(string workingDirectory, params string[] args)
     {
-        var start = new ProcessStartInfo("dotnet")
-        {
-            WorkingDirectory = workingDirectory,
-            RedirectStandardOutput = true,
-            RedirectStandardError = true,
-            UseShellExecute = false,
-        };
-        foreach (var a in args)
-        {
-            start.ArgumentList.Add(a);
-        }
-
-        start.Environment["NUGET_PACKAGES"] = folder.Combine("packages");
-        start.Environment["DOTNET_CLI_TELEMETRY_OPTOUT"] = "1";
-        start.Environment["DOTNET_NOLOGO"] = "1";
-        start.Environment["DOTNET_SKIP_FIRST_TIME_EXPERIENCE"] = "1";
-        start.Environment["MSBUILDDISABLENODEREUSE"] = "1";
-        using var process = Process.Start(start)!;
-        var stderr = process.StandardError.ReadToEndAsync();
-        var stdout = process.StandardOutput.ReadToEnd();
-        process.WaitForExit();
-        return (process.ExitCode, stdout + stderr.GetAwaiter().GetResult());
+        var result = DotnetCli.Run(workingDirectory, args, new Dictionary<string, string> { ["NUGET_PACKAGES"] = folder.Combine("packages") });
+        return (result.ExitCode, result.Log);
     }
 }

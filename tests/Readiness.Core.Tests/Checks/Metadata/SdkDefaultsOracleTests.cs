@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using System.Text.Json;
 using Readiness.Core.Checks.Metadata;
 using Readiness.Core.Projects;
@@ -38,21 +37,9 @@ public sealed class SdkDefaultsOracleTests
 
     private static Dictionary<string, string> GetProperties(string project, params string[] names)
     {
-        var start = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
-        start.ArgumentList.Add("msbuild");
-        start.ArgumentList.Add(project);
-        foreach (var n in names)
-        {
-            start.ArgumentList.Add("-getProperty:" + n);
-        }
-
-        start.Environment["DOTNET_CLI_TELEMETRY_OPTOUT"] = "1";
-        start.Environment["DOTNET_NOLOGO"] = "1";
-        using var p = Process.Start(start)!;
-        var stderr = p.StandardError.ReadToEndAsync();
-        var output = p.StandardOutput.ReadToEnd();
-        p.WaitForExit();
-        Assert.True(p.ExitCode == 0, stderr.Result);
+        var result = DotnetCli.Run(Path.GetDirectoryName(project)!, ["msbuild", project, .. names.Select(n => "-getProperty:" + n)]);
+        Assert.True(result.Succeeded, result.StdErr);
+        var output = result.StdOut;
         using var doc = JsonDocument.Parse(output);
         return doc.RootElement.GetProperty("Properties").EnumerateObject().ToDictionary(x => x.Name, x => x.Value.GetString() ?? string.Empty);
     }
