@@ -1,5 +1,4 @@
 using System.ComponentModel;
-using System.Diagnostics;
 using System.Text.RegularExpressions;
 
 using Readiness.Core.Snapshots;
@@ -108,49 +107,15 @@ public sealed partial class GitSignatureVerifier : ISignatureVerifier
 
     private (int ExitCode, string Output) Run(string command, IEnumerable<string> arguments)
     {
-        var start = new ProcessStartInfo("git")
-        {
-            WorkingDirectory = gitDirectory,
-            UseShellExecute = false,
-            RedirectStandardInput = true,
-            RedirectStandardOutput = true,
-            RedirectStandardError = true,
-        };
-        foreach (var argument in arguments)
-        {
-            start.ArgumentList.Add(argument);
-        }
-
-        foreach (var name in ScrubbedVariables)
-        {
-            start.Environment.Remove(name);
-        }
-
-        start.Environment["GIT_DIR"] = gitDirectory;
-        start.Environment["GIT_TERMINAL_PROMPT"] = "0";
-        start.Environment["GIT_PAGER"] = "cat";
-        start.Environment["LC_ALL"] = "C";
-
-        using var process = Process.Start(start) ?? throw new Win32Exception("git did not start");
-        process.StandardInput.Close();
-        var stdout = process.StandardOutput.ReadToEndAsync();
-        var stderr = process.StandardError.ReadToEndAsync();
-        if (!process.WaitForExit(Timeout))
-        {
-            try
-            {
-                process.Kill(entireProcessTree: true);
-            }
-            catch (InvalidOperationException)
-            {
-                // It ended on its own meanwhile.
-            }
-
-            throw new TimeoutException($"git {command} did not finish within {Timeout.TotalSeconds:0} s; the signature was not verified.");
-        }
-
-        process.WaitForExit();
-        return (process.ExitCode, stdout.GetAwaiter().GetResult() + stderr.GetAwaiter().GetResult());
+        var environment = ScrubbedVariables.ToDictionary(name => name, string? (_) => null, StringComparer.Ordinal);
+        environment["GIT_DIR"] = gitDirectory;
+        environment["GIT_TERMINAL_PROMPT"] = "0";
+        environment["GIT_PAGER"] = "cat";
+        environment["LC_ALL"] = "C";
+        var result = GitCommand.Run(gitDirectory, arguments, environment, Timeout);
+        return result.TimedOut
+            ? throw new TimeoutException($"git {command} did not finish within {Timeout.TotalSeconds:0} s; the signature was not verified.")
+            : (result.ExitCode, result.Output + result.Error);
     }
 
     private static string Describe(string output, string command, int exitCode)
