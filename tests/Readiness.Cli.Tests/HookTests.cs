@@ -70,7 +70,11 @@ public sealed class HookTests : IDisposable
         var result = Push("origin", "main", "v1.3.0");
         Assert.False(result.Succeeded);
         Assert.Contains("changelog.has-entry", result.StdErr, StringComparison.Ordinal);
-        Assert.Contains("CHANGELOG.md", result.StdErr, StringComparison.Ordinal);
+        Assert.Contains("CHANGELOG.md:", result.StdErr, StringComparison.Ordinal);
+        Assert.DoesNotContain("CHANGELOG.md, CHANGELOG.md", result.StdErr, StringComparison.Ordinal);
+
+        // The way to the full report names the tag, so it judges the same version and signature as the hook did.
+        Assert.Contains("full report: readiness check --ref v1.3.0 --format html", result.StdErr, StringComparison.Ordinal);
         Assert.DoesNotContain("v1.3.0", RemoteTags(), StringComparison.Ordinal);
     }
 

@@ -136,7 +136,9 @@ public sealed class PrePushRunner(Composition composition, CliConsole console)
 
         if (!ready)
         {
-            await console.Error.WriteLineAsync($"  full report: readiness check --ref {pushed.LocalOid[..12]} --format html --output readiness-report.html").ConfigureAwait(false);
+            // A pushed tag is named so that the full report reads the same tag (its version, its signature).
+            var reference = pushed.LocalRef.StartsWith("refs/tags/", StringComparison.Ordinal) ? pushed.LocalRef["refs/tags/".Length..] : pushed.LocalOid[..12];
+            await console.Error.WriteLineAsync($"  full report: readiness check --ref {reference} --format html --output readiness-report.html").ConfigureAwait(false);
         }
     }
 

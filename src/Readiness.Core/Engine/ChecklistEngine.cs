@@ -99,7 +99,7 @@ public sealed class ChecklistEngine(CheckCatalog catalog, TimeProvider time)
             f.Package,
             f.Message,
             f.Status is CheckStatus.Fail or CheckStatus.Error ? f.Hint ?? d.Fix : f.Hint,
-            f.Evidence ?? [],
+            Evidence.Condense(f.Evidence ?? []),
             d.Standard));
     }
 }

@@ -23,7 +23,7 @@ public static class SecretScanner
             var size = files.SizeOf(path) ?? 0;
             if (KeyFiles.Describe(path, () => size <= maxBytes ? files.ReadBytes(path, maxBytes) : null) is { } keyFile)
             {
-                hits.Add(new SecretHit(path, null, keyFile, "file format"));
+                hits.Add(new SecretHit(path, null, keyFile, "the file's name and format"));
                 binary++;
                 continue;
             }

@@ -47,7 +47,7 @@ public sealed class NoneCommittedCheck : ICheck
             var where = lines.Length == 0 ? file.Key : $"{file.Key} (line{(lines.Length == 1 ? string.Empty : "s")} {string.Join(", ", lines)})";
             var evidence = lines.Length == 0 ? [new Evidence(file.Key)] : lines.Select(l => new Evidence(file.Key, l)).ToArray();
             yield return Finding.Fail(
-                $"{where} holds {kinds}. Shapes per {string.Join("; ", hits.Select(h => h.Source).Distinct(StringComparer.Ordinal))}.",
+                $"{where} holds {kinds} (recognised from: {string.Join("; ", hits.Select(h => h.Source).Distinct(StringComparer.Ordinal))}).",
                 Advice,
                 null,
                 evidence);
