@@ -16,7 +16,8 @@ public sealed class SigningTagCheck : ICheck
         "A signed tag lets anyone confirm that a maintainer, not someone with push access alone, named this commit "
         + "the release. A lightweight tag is only a pointer: it carries no tagger, date or signature.",
         "Create the tag with 'git tag -s' (annotated and signed; for SSH keys set gpg.format=ssh and user.signingkey), "
-        + "list the maintainers' public keys in the allowed-signers file, then push the tag again.");
+        + "list the maintainers' public keys in the allowed-signers file, then push the tag again; create, store and "
+        + "rotate signing keys as your organisation's security policy says.");
 
     public IEnumerable<Finding> Run(CheckContext context)
     {
@@ -39,7 +40,8 @@ public sealed class SigningTagCheck : ICheck
             yield return Finding.Fail(
                 $"The tag {tag.Name} is lightweight: a plain pointer with no tagger, date or signature.",
                 "Replace it with a signed annotated tag: 'git tag -d " + tag.Name + "', then 'git tag -s " + tag.Name
-                + "' (gpg.format=ssh for SSH keys), and push it with --force if it was pushed already.");
+                + "' (gpg.format=ssh for SSH keys) with a key kept as your organisation's security policy says, and push it "
+                + "with --force if it was pushed already.");
             yield break;
         }
 
