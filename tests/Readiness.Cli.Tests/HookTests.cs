@@ -185,6 +185,12 @@ public sealed class HookTests : IDisposable
         var (status, statusOut, _) = await CliHarness.RunAsync(repo.Path, "hook", "status");
         Assert.Equal(0, status);
         Assert.Contains("chained", statusOut, StringComparison.Ordinal);
+        Assert.DoesNotContain("differs from the hook", statusOut, StringComparison.Ordinal);
+
+        // A copy left by an earlier version (or edited by hand) still works, and status says how to refresh it.
+        File.AppendAllText(Path.Combine(hooks, "pre-push"), "# edited\n");
+        var (_, edited, _) = await CliHarness.RunAsync(repo.Path, "hook", "status");
+        Assert.Contains("differs from the hook this readiness ships", edited, StringComparison.Ordinal);
 
         var (exit, _, _) = await CliHarness.RunAsync(repo.Path, "hook", "uninstall");
         Assert.Equal(0, exit);

@@ -72,8 +72,11 @@ public sealed class HookInstaller(string repositoryPath)
         return string.Join(Environment.NewLine, messages);
     }
 
-    /// <summary>What is installed, and whether it can work. Returns (healthy, lines).</summary>
-    public (bool Healthy, IReadOnlyList<string> Lines) Status()
+    /// <summary>
+    /// What is installed, and whether it can work. Returns (healthy, lines). With <paramref name="hookSource"/> (the
+    /// hook this program ships), an installed hook that differs from it is named as an older version.
+    /// </summary>
+    public (bool Healthy, IReadOnlyList<string> Lines) Status(string? hookSource = null)
     {
         var hooks = HooksDirectory();
         var target = Path.Combine(hooks, HookName);
@@ -93,6 +96,11 @@ public sealed class HookInstaller(string repositoryPath)
 
         var executable = OperatingSystem.IsWindows() || (File.GetUnixFileMode(target) & UnixFileMode.UserExecute) != 0;
         lines.Add($"pre-push: Readiness hook{(executable ? string.Empty : " (NOT executable: git will ignore it)")}");
+        if (hookSource is not null && File.Exists(hookSource) && File.ReadAllText(hookSource) != File.ReadAllText(target))
+        {
+            lines.Add("pre-push: differs from the hook this readiness ships (an older or edited copy); 'readiness hook install' replaces it");
+        }
+
         healthy &= executable;
         if (File.Exists(Path.Combine(hooks, ChainedName)))
         {
