@@ -40,13 +40,15 @@ public sealed class PrePushRunner(Composition composition, CliConsole console)
         var blocked = false;
         foreach (var pushed in refs.Where(r => !r.IsDelete))
         {
-            var request = ReleaseRequest(repository, pushed);
+            // One snapshot of the pushed object serves both the decision (its configuration) and the check.
+            using var snapshot = composition.Snapshots.Open(new SnapshotRequest(repository, pushed.LocalOid, pushed.LocalTagName));
+            var request = ReleaseRequest(snapshot, pushed);
             if (request is null)
             {
                 continue;
             }
 
-            var report = await composition.Runner.RunAsync(request, registries, cancellationToken).ConfigureAwait(false);
+            var report = await composition.Runner.RunAsync(snapshot, request, registries, cancellationToken).ConfigureAwait(false);
             var waived = report.Results.Where(r => r.IsBlocking && waivers.Covers(r.Check)).ToList();
             var blocking = report.Results.Where(r => r.IsBlocking && !waivers.Covers(r.Check)).ToList();
             var manualBlocking = report.Summary.Blocking - report.Results.Count(r => r.IsBlocking);
@@ -72,33 +74,23 @@ public sealed class PrePushRunner(Composition composition, CliConsole console)
     }
 
     /// <summary>The inspection for a pushed ref, or null when the ref is not release-relevant under the pushed commit's configuration.</summary>
-    public RunRequest? ReleaseRequest(string repository, PushedRef pushed)
+    public RunRequest? ReleaseRequest(ReleaseSnapshot snapshot, PushedRef pushed)
     {
+        ArgumentNullException.ThrowIfNull(snapshot);
         ArgumentNullException.ThrowIfNull(pushed);
-        using var snapshot = composition.Snapshots.Open(new SnapshotRequest(repository, pushed.LocalOid));
         var config = composition.Runner.ReadConfig(snapshot.Files);
+        var request = new SnapshotRequest(snapshot.Repository, pushed.LocalOid, pushed.LocalTagName);
         if (pushed.TagName is { } tag)
         {
             var match = new TagPattern(config.TagPattern).Match(tag);
-            if (match is null)
-            {
-                return null;
-            }
-
-            var localTag = pushed.LocalRef.StartsWith("refs/tags/", StringComparison.Ordinal) ? pushed.LocalRef["refs/tags/".Length..] : null;
-            return new RunRequest(
-                new SnapshotRequest(repository, pushed.LocalOid, localTag),
-                Version: localTag is null ? match.Value.Version : null,
-                Config: config,
-                RegistryTimeout: RegistryTimeout);
+            return match is null
+                ? null
+                : new RunRequest(request, Version: pushed.LocalTagName is null ? match.Value.Version : null, Config: config, RegistryTimeout: RegistryTimeout);
         }
 
-        if (pushed.BranchName is { } branch && NameGlob.MatchesAny(config.GetList("release-branches"), branch))
-        {
-            return new RunRequest(new SnapshotRequest(repository, pushed.LocalOid), Config: config, RegistryTimeout: RegistryTimeout);
-        }
-
-        return null;
+        return pushed.BranchName is { } branch && NameGlob.MatchesAny(config.GetList("release-branches"), branch)
+            ? new RunRequest(request, Config: config, RegistryTimeout: RegistryTimeout)
+            : null;
     }
 
     private async Task WriteAsync(PushedRef pushed, Report report, IReadOnlyList<CheckResult> blocking, IReadOnlyList<CheckResult> waived, Waivers waivers, bool ready)
@@ -137,7 +129,7 @@ public sealed class PrePushRunner(Composition composition, CliConsole console)
         if (!ready)
         {
             // A pushed tag is named so that the full report reads the same tag (its version, its signature).
-            var reference = pushed.LocalRef.StartsWith("refs/tags/", StringComparison.Ordinal) ? pushed.LocalRef["refs/tags/".Length..] : pushed.LocalOid[..12];
+            var reference = pushed.LocalTagName ?? pushed.LocalOid[..12];
             await console.Error.WriteLineAsync($"  full report: readiness check --ref {reference} --format html --output readiness-report.html").ConfigureAwait(false);
         }
     }

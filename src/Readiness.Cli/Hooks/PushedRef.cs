@@ -14,6 +14,9 @@ public sealed record PushedRef(string LocalRef, string LocalOid, string RemoteRe
 
     public string? TagName => RemoteRef.StartsWith("refs/tags/", StringComparison.Ordinal) ? RemoteRef["refs/tags/".Length..] : null;
 
+    /// <summary>The local tag's name when a local tag is pushed (<c>git push origin v1.2.0</c>), else null.</summary>
+    public string? LocalTagName => LocalRef.StartsWith("refs/tags/", StringComparison.Ordinal) ? LocalRef["refs/tags/".Length..] : null;
+
     public string? BranchName => RemoteRef.StartsWith("refs/heads/", StringComparison.Ordinal) ? RemoteRef["refs/heads/".Length..] : null;
 
     /// <summary>Parses the hook's standard input; malformed lines are returned as errors, not guessed.</summary>

@@ -30,6 +30,14 @@ public sealed class ReadinessRunner(
     {
         ArgumentNullException.ThrowIfNull(request);
         using var snapshot = snapshots.Open(request.Snapshot);
+        return await RunAsync(snapshot, request, registries, cancellationToken).ConfigureAwait(false);
+    }
+
+    /// <summary>Runs one inspection on a snapshot the caller opened (and disposes); <c>request.Snapshot</c> is not opened again.</summary>
+    public async Task<Report> RunAsync(ReleaseSnapshot snapshot, RunRequest request, RegistrySelector? registries, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(snapshot);
+        ArgumentNullException.ThrowIfNull(request);
         var config = request.Config ?? ReadConfig(snapshot.Files);
         var resolver = Resolver;
         var definition = request.Checklist
