@@ -73,6 +73,18 @@ public sealed class HookScriptTests : IDisposable
     }
 
     [Fact]
+    public void RunawayConfiguration_IsReadOnlyUpToItsBound()
+    {
+        // 200,000 lines: the shell stops after 2,000, so a pattern further down is not seen (the engine, which reads
+        // the file itself, reports a file that large); a push is not held up by reading it all.
+        var config = "checklist: strict\n" + string.Concat(Enumerable.Repeat("# filler\n", 200_000)) + "tag-pattern: 'late-{version}'\n";
+        var (exit, trace, error) = RunHook(config, $"refs/heads/main {Oid} refs/heads/main {Zero}\nrefs/tags/v1.0.0 {Oid} refs/tags/v1.0.0 {Zero}\n");
+        Assert.Equal(1, exit); // v1.0.0 matches the default pattern v*; readiness is not on this PATH
+        Assert.Contains("release tag v1.0.0", trace, StringComparison.Ordinal);
+        Assert.Contains("cannot find the readiness command", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void ChainedHook_GetsGitsLinesUnchanged_AndItsFailureBlocks()
     {
         // githooks(5), pre-push: one line per ref, "<local ref> SP <local oid> SP <remote ref> SP <remote oid> LF".
