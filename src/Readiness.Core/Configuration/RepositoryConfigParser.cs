@@ -18,6 +18,7 @@ public sealed class RepositoryConfigParser(ChecklistParser checklists)
         "maintenance-lines",
         "owners",
         "publish-to",
+        "registry-required",
         "registry-timeout",
         "release-branches",
         "require-targets",

@@ -46,6 +46,20 @@ public sealed class ChecklistTests
     }
 
     [Fact]
+    public void Strict_RequiresTheRegistrysAnswer_ForItsBlockingRegistryChecks()
+    {
+        var resolver = Resolver();
+        var resolved = resolver.Resolve(resolver.Load("strict"));
+        foreach (var id in new[] { CheckIds.RegistryVersionFree, CheckIds.RegistryIdOwned, CheckIds.RegistryDependenciesPublished })
+        {
+            var planned = resolved.Checks.Single(c => c.Id == id);
+            Assert.True(planned.With["registry-required"].AsBool("registry-required"), id);
+        }
+
+        Assert.False(resolved.Checks.Single(c => c.Id == CheckIds.RegistryAheadOfPublished).With.ContainsKey("registry-required"));
+    }
+
+    [Fact]
     public void UnknownKey_NamesFileLineAndColumn()
     {
         var e = Assert.Throws<ConfigurationException>(() => Parser.Parse("mine.yml", "name: mine\ncheks:\n  version.well-formed: {}\n"));

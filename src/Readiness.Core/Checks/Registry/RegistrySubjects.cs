@@ -11,16 +11,26 @@ namespace Readiness.Core.Checks.Registry;
 /// releases, and the dependencies a package will declare.</summary>
 internal static class RegistrySubjects
 {
-    /// <summary>A skip for the whole check when no registry facts are there (offline, unreachable), else null.</summary>
+    /// <summary>The parameter by which a checklist (or <c>.readiness.yml</c>) makes a missing answer a failure.</summary>
+    public const string RequiredParameter = "registry-required";
+
+    private const string RequiredHint =
+        "Run the check again when the registry answers (or without --offline). This checklist sets registry-required: "
+        + "a release is not judged ready without the registry's answer; waive the check with a reason if you must go on.";
+
+    /// <summary>
+    /// When no registry facts are there (offline, unreachable): a skip for the whole check, or a failure when the
+    /// checklist sets <c>registry-required: true</c>; else null.
+    /// </summary>
     public static Finding? Unavailable(CheckContext context)
     {
         if (context.Registry is null)
         {
-            return Finding.Skip("No registry was asked (offline); this check needs one.");
+            return Missing(context, "No registry was asked (offline); this check needs one.", null);
         }
 
         return context.Registry.Unavailable is { } why
-            ? Finding.Skip($"The registry could not be asked ({why}).")
+            ? Missing(context, $"The registry could not be asked ({why}).", null)
             : null;
     }
 
@@ -36,8 +46,13 @@ internal static class RegistrySubjects
 
         return lookup.Available
             ? (lookup, null)
-            : (null, Finding.Skip($"{id}: no answer from the registry ({lookup.Problem}).", package));
+            : (null, Missing(context, $"{id}: no answer from the registry ({lookup.Problem}).", package));
     }
+
+    private static Finding Missing(CheckContext context, string message, string? package) =>
+        context.Parameters.Bool(RequiredParameter)
+            ? Finding.Fail(message + " The checklist requires the registry's answer (registry-required).", RequiredHint, package)
+            : Finding.Skip(message, package);
 
     /// <summary>
     /// The version <paramref name="project"/> releases: <c>--version</c>, else the release tag's (with per-package

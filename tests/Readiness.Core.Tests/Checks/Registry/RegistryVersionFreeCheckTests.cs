@@ -116,6 +116,27 @@ public class RegistryVersionFreeCheckTests
     }
 
     [Fact]
+    public void RegistryRequired_OfflineOrUnanswered_Fails()
+    {
+        var model = Model(Library("Bramble.Sketches", "2.4.0"), Library("Bramble.Sketches.Lanternfly3", "2.4.0"));
+        const string Required = "registry-required: true\n";
+
+        var offline = Assert.Single(check.Run(RegistryCheckContexts.For(model, null, yaml: Required)));
+        Assert.Equal(CheckStatus.Fail, offline.Status);
+        Assert.Contains("registry-required", offline.Message, StringComparison.Ordinal);
+        Assert.Contains("waive", offline.Hint, StringComparison.Ordinal);
+
+        var unreachable = Assert.Single(check.Run(RegistryCheckContexts.For(model, RegistryFacts.Offline("the feed did not answer within 3 s"), yaml: Required)));
+        Assert.Equal(CheckStatus.Fail, unreachable.Status);
+        Assert.Contains("did not answer within 3 s", unreachable.Message, StringComparison.Ordinal);
+
+        var facts = Facts(PackageLookup.Unavailable("Bramble.Sketches", "HTTP 500 from the feed"), Unknown("Bramble.Sketches.Lanternfly3"));
+        var findings = check.Run(RegistryCheckContexts.For(model, facts, yaml: Required)).ToList();
+        Assert.Equal(CheckStatus.Fail, findings.Single(f => f.Package == "Bramble.Sketches").Status);
+        Assert.Equal(CheckStatus.Pass, findings.Single(f => f.Package == "Bramble.Sketches.Lanternfly3").Status);
+    }
+
+    [Fact]
     public void LookupProblem_SkipsThatPackageWithReason()
     {
         var facts = Facts(
