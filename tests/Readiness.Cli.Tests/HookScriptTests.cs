@@ -20,31 +20,51 @@ public sealed class HookScriptTests : IDisposable
 
     private readonly TempDirectory folder = new();
 
-    public static TheoryData<string, string, bool> Cases => new()
+    /// <summary>dash is /bin/sh on Debian-like systems; bash is what git for Windows and older macOS run as sh.</summary>
+    private static readonly string[] Shells = ["/bin/sh", "/bin/bash"];
+
+    public static TheoryData<string, string, string, bool> Cases
     {
+        get
+        {
+            var data = new TheoryData<string, string, string, bool>();
+            foreach (var shell in Shells.Where(File.Exists))
+            {
+                foreach (var (config, pushedRef, expected) in Table)
+                {
+                    data.Add(shell, config, pushedRef, expected);
+                }
+            }
+
+            return data;
+        }
+    }
+
+    private static (string Config, string Ref, bool Expected)[] Table =>
+    [
         // config, ref pushed, expected by the shell (true = hand over to readiness), with the reason in the ref name.
-        { string.Empty, "refs/tags/v1.2.0", true },
-        { string.Empty, "refs/tags/release-1.2.0", false },
-        { string.Empty, "refs/heads/release/1.2", false },
-        { "tag-pattern: \"rel-{version}\"   # quoted, with a comment\n", "refs/tags/rel-2.0.0", true },
-        { "tag-pattern: \"rel-{version}\"   # quoted, with a comment\n", "refs/tags/v2.0.0", false },
-        { "tag-pattern: '{id}/v{version}'\n", "refs/tags/Bramble.Sketches/v2.4.0", true },
-        { "tag-pattern: \"{id}@{version}\"\r\nchecklist: host-plugin\r\n", "refs/tags/Bramble.Sketches@2.4.0", true },
-        { "release-branches: [release/*, 'maint-*']\n", "refs/heads/maint-2.3", true },
-        { "release-branches: [release/*, 'maint-*']\n", "refs/heads/main", false },
-        { "release-branches:\n  # the supported lines\n  - release/*\n  - \"hotfix/*\"   # urgent fixes\n\nchecklist: strict\n", "refs/heads/hotfix/2.3.2", true },
-        { "release-branches:\n- release/*\nchecklist: strict\n", "refs/heads/release/2.4", true },
-        { "release-branches:\n- release/*\nchecklist: strict\n", "refs/heads/feature/release/2.4", false },
-        { "checklist: strict\nrelease-branches: []\n", "refs/heads/release/2.4", false },
-    };
+        (string.Empty, "refs/tags/v1.2.0", true),
+        (string.Empty, "refs/tags/release-1.2.0", false),
+        (string.Empty, "refs/heads/release/1.2", false),
+        ("tag-pattern: \"rel-{version}\"   # quoted, with a comment\n", "refs/tags/rel-2.0.0", true),
+        ("tag-pattern: \"rel-{version}\"   # quoted, with a comment\n", "refs/tags/v2.0.0", false),
+        ("tag-pattern: '{id}/v{version}'\n", "refs/tags/Bramble.Sketches/v2.4.0", true),
+        ("tag-pattern: \"{id}@{version}\"\r\nchecklist: host-plugin\r\n", "refs/tags/Bramble.Sketches@2.4.0", true),
+        ("release-branches: [release/*, 'maint-*']\n", "refs/heads/maint-2.3", true),
+        ("release-branches: [release/*, 'maint-*']\n", "refs/heads/main", false),
+        ("release-branches:\n  # the supported lines\n  - release/*\n  - \"hotfix/*\"   # urgent fixes\n\nchecklist: strict\n", "refs/heads/hotfix/2.3.2", true),
+        ("release-branches:\n- release/*\nchecklist: strict\n", "refs/heads/release/2.4", true),
+        ("release-branches:\n- release/*\nchecklist: strict\n", "refs/heads/feature/release/2.4", false),
+        ("checklist: strict\nrelease-branches: []\n", "refs/heads/release/2.4", false),
+    ];
 
     [Theory]
     [MemberData(nameof(Cases))]
-    public void ShellDecision_AgreesWithTheEngine(string config, string pushedRef, bool expected)
+    public void ShellDecision_AgreesWithTheEngine(string shell, string config, string pushedRef, bool expected)
     {
-        var (exit, trace, error) = RunHook(config, $"{pushedRef} {Oid} {pushedRef} {Zero}\n");
-        var shell = trace.Contains("decision: run", StringComparison.Ordinal);
-        Assert.Equal(expected, shell);
+        var (exit, trace, error) = RunHook(config, $"{pushedRef} {Oid} {pushedRef} {Zero}\n", shell: shell);
+        var handedOver = trace.Contains("decision: run", StringComparison.Ordinal);
+        Assert.Equal(expected, handedOver);
         Assert.Equal(expected ? 1 : 0, exit); // on a release ref the hook looks for readiness, which PATH does not have here
         if (!expected)
         {
@@ -103,7 +123,7 @@ public sealed class HookScriptTests : IDisposable
         Assert.Contains("skip delete refs/tags/v0.9.0", trace, StringComparison.Ordinal);
     }
 
-    private (int Exit, string Trace, string Error) RunHook(string config, string input, string? hook = null)
+    private (int Exit, string Trace, string Error) RunHook(string config, string input, string? hook = null, string shell = "/bin/sh")
     {
         var work = folder.Combine("work-" + Guid.NewGuid().ToString("N")[..8]);
         var emptyPath = Path.Combine(work, "empty-path");
@@ -114,7 +134,7 @@ public sealed class HookScriptTests : IDisposable
         }
 
         var trace = Path.Combine(work, "trace.log");
-        var info = new ProcessStartInfo("/bin/sh") { WorkingDirectory = work, RedirectStandardInput = true, RedirectStandardError = true, RedirectStandardOutput = true };
+        var info = new ProcessStartInfo(shell) { WorkingDirectory = work, RedirectStandardInput = true, RedirectStandardError = true, RedirectStandardOutput = true };
         info.ArgumentList.Add(hook ?? Hook);
         info.ArgumentList.Add("origin");
         info.ArgumentList.Add("file:///remote.git");
