@@ -158,6 +158,17 @@ public sealed class HookTests : IDisposable
     }
 
     [Fact]
+    public async Task Waiver_NamingNoCheck_StopsThePush_AndSuggestsTheNearestId()
+    {
+        await InstallAsync();
+        MakeNotReadyTag();
+        var result = PushWith(Env("changelog.has-entyr: notes go out with the announcement"), "origin", "v1.3.0");
+        Assert.False(result.Succeeded);
+        Assert.Contains("READINESS_WAIVE names 'changelog.has-entyr', which is not a check; did you mean 'changelog.has-entry'?", result.StdErr, StringComparison.Ordinal);
+        Assert.Equal(string.Empty, RemoteTags().Trim());
+    }
+
+    [Fact]
     public async Task Install_HonoursCoreHooksPath_ChainsAnExistingHook_IsIdempotent_AndUninstallRestores()
     {
         var hooks = scratch.Combine("shared-hooks");

@@ -24,7 +24,8 @@ public sealed class PrePushRunner(Composition composition, CliConsole console)
             await console.Error.WriteLineAsync($"readiness: {error}").ConfigureAwait(false);
         }
 
-        var (waivers, waiverErrors) = Waivers.Parse(console.Env("READINESS_WAIVE"));
+        var (waivers, parseErrors) = Waivers.Parse(console.Env("READINESS_WAIVE"));
+        var waiverErrors = parseErrors.Concat(waivers.Unknown(composition.Catalog.Ids)).ToList();
         foreach (var error in waiverErrors)
         {
             await console.Error.WriteLineAsync($"readiness: {error}").ConfigureAwait(false);
