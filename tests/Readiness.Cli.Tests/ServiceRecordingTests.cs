@@ -79,6 +79,7 @@ public sealed class ServiceRecordingTests : IDisposable
         Assert.Null(ServiceRecording.Read(Console(new Dictionary<string, string>()), repo.Path));
 
     [Fact]
+    [System.Runtime.Versioning.UnsupportedOSPlatform("windows")]
     public void GitConfig_NamesTheServiceAndTheTokenFile_WhoseFirstLineIsTheToken()
     {
         var file = scratch.Combine("readiness-token");
@@ -86,10 +87,20 @@ public sealed class ServiceRecordingTests : IDisposable
         repo.Git("config", ServiceRecording.UrlSetting, "https://readiness.bramblecote.example/");
         repo.Git("config", ServiceRecording.TokenFileSetting, file);
 
+        File.SetUnixFileMode(file, UnixFileMode.UserRead | UnixFileMode.UserWrite);
         var settings = ServiceRecording.Read(Console(new Dictionary<string, string>()), repo.Path)!;
         Assert.Equal("https://readiness.bramblecote.example/", settings.ServiceText);
         Assert.Equal(Token, settings.Token);
         Assert.Null(settings.Problem());
+        Assert.Null(settings.TokenNotice);
+
+        // Readable by the group and others (0644): still used, with a notice like ssh's for key files.
+        File.SetUnixFileMode(file, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead | UnixFileMode.OtherRead);
+        var open = ServiceRecording.Read(Console(new Dictionary<string, string>()), repo.Path)!;
+        Assert.Equal(Token, open.Token);
+        Assert.Contains("can be read by other users (mode 644)", open.TokenNotice, StringComparison.Ordinal);
+        Assert.Contains("security policy", open.TokenNotice, StringComparison.Ordinal);
+        Assert.DoesNotContain(Token, open.TokenNotice, StringComparison.Ordinal);
 
         // The environment wins over git config, for the URL and for the token.
         var env = new Dictionary<string, string> { [ServiceRecording.UrlVariable] = "http://127.0.0.1:5080", [ServiceRecording.TokenVariable] = "from-env" };

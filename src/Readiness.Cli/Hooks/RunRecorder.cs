@@ -32,6 +32,11 @@ public sealed class RunRecorder(CliConsole console, string repository) : IDispos
         {
             settingsRead = true;
             settings = ServiceRecording.Read(console, repository);
+            if (settings?.TokenNotice is { } notice)
+            {
+                await console.Error.WriteLineAsync($"readiness: {notice}").ConfigureAwait(false);
+            }
+
             if (settings?.Problem() is { } reason)
             {
                 problem = reason;

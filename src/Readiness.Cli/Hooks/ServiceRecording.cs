@@ -13,7 +13,8 @@ namespace Readiness.Cli.Hooks;
 /// <param name="ServiceText">The service's base URL as configured.</param>
 /// <param name="Token">The bearer token, when one was found.</param>
 /// <param name="TokenProblem">Why the token file could not be used (never its content).</param>
-public sealed record ServiceRecording(string ServiceText, string? Token, string? TokenProblem = null)
+/// <param name="TokenNotice">A warning about a token file that was used (other users may read it).</param>
+public sealed record ServiceRecording(string ServiceText, string? Token, string? TokenProblem = null, string? TokenNotice = null)
 {
     public const string UrlVariable = "READINESS_SERVICE_URL";
     public const string TokenVariable = "READINESS_SERVICE_TOKEN";
@@ -56,8 +57,9 @@ public sealed record ServiceRecording(string ServiceText, string? Token, string?
             return new ServiceRecording(service, null);
         }
 
-        var (fileToken, problem) = ReadTokenFile(Path.GetFullPath(file, repository));
-        return new ServiceRecording(service, fileToken, problem);
+        var path = Path.GetFullPath(file, repository);
+        var (fileToken, problem) = ReadTokenFile(path);
+        return new ServiceRecording(service, fileToken, problem, fileToken is null ? null : ReadableByOthers(path));
     }
 
     /// <summary>Why nothing may be sent, or null when the run can be recorded.</summary>
@@ -103,12 +105,27 @@ public sealed record ServiceRecording(string ServiceText, string? Token, string?
 
     /// <summary>The settings without the token.</summary>
     public override string ToString() =>
-        $"ServiceRecording {{ Service = {Display}, Token = {(Token is null ? "none" : "(set)")}{(TokenProblem is null ? string.Empty : ", TokenProblem = " + TokenProblem)} }}";
+        $"ServiceRecording {{ Service = {Display}, Token = {(Token is null ? "none" : "(set)")}{(TokenProblem is null ? string.Empty : ", TokenProblem = " + TokenProblem)}{(TokenNotice is null ? string.Empty : ", TokenNotice = " + TokenNotice)} }}";
 
     private static string? GitConfig(string repository, params string[] arguments)
     {
         var (code, output, _) = GitProcess.Run(repository, ["config", .. arguments]);
         return code == 0 && output.Trim().Length > 0 ? output.Trim() : null;
+    }
+
+    /// <summary>On Unix, a notice when the group or other users may read the token file (as ssh warns of key files).</summary>
+    private static string? ReadableByOthers(string path)
+    {
+        if (OperatingSystem.IsWindows())
+        {
+            return null;
+        }
+
+        var mode = File.GetUnixFileMode(path);
+        return (mode & (UnixFileMode.GroupRead | UnixFileMode.OtherRead)) == 0
+            ? null
+            : $"the token file {path} can be read by other users (mode {Convert.ToString((int)mode, 8).PadLeft(3, '0')}); "
+              + "restrict it (chmod 600) and keep it as your organisation's security policy says";
     }
 
     private static (string? Token, string? Problem) ReadTokenFile(string path)
