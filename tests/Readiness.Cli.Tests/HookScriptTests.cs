@@ -93,6 +93,14 @@ public sealed class HookScriptTests : IDisposable
     }
 
     [Fact]
+    public void LastLineWithoutLineFeed_IsStillRead()
+    {
+        // git ends every line with LF (githooks(5)); a caller that does not must not slip a release tag through.
+        var (_, trace, _) = RunHook(string.Empty, $"refs/heads/main {Oid} refs/heads/main {Zero}\nrefs/tags/v1.0.0 {Oid} refs/tags/v1.0.0 {Zero}");
+        Assert.Contains("release tag v1.0.0", trace, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void RunawayConfiguration_IsReadOnlyUpToItsBound()
     {
         // 200,000 lines: the shell stops after 2,000, so a pattern further down is not seen (the engine, which reads
