@@ -53,6 +53,21 @@ public sealed class HookPushBench : IBench
         Console.WriteLine($"added by an empty hook (median): {Stats.Percentile(floor, 0.5) - median:0.0} ms");
         Console.WriteLine($"added by the Readiness hook (median): {Stats.Percentile(with, 0.5) - median:0.0} ms");
 
+        // The scripts alone, started the way git starts a hook (an executable file with git's line on standard input),
+        // interleaved: what the Readiness script adds over the cheapest possible hook, without git's own variance.
+        var line = $"refs/heads/main {hooked.Sha("HEAD")} refs/heads/main {new string('0', 40)}\n";
+        var emptyScript = new List<double>();
+        var readinessScript = new List<double>();
+        for (var i = 0; i < runs * 3; i++)
+        {
+            emptyScript.Add(TimeScript(Path.Combine(empty.GitDirectory, "hooks", "pre-push"), hooked.Path, line));
+            readinessScript.Add(TimeScript(Path.Combine(hooked.GitDirectory, "hooks", "pre-push"), hooked.Path, line));
+        }
+
+        Console.WriteLine($"empty hook script alone:     {Stats.Describe(emptyScript)}");
+        Console.WriteLine($"Readiness hook script alone: {Stats.Describe(readinessScript)}");
+        Console.WriteLine($"script cost over an empty hook (median): {Stats.Percentile(readinessScript, 0.5) - Stats.Percentile(emptyScript, 0.5):0.00} ms");
+
         using var folder = new TempDirectory();
         var demo = folder.Combine("bramble-sketches");
         DemoRepository.Create(demo);
@@ -70,6 +85,27 @@ public sealed class HookPushBench : IBench
         var command = prefix.Length == 0 ? file : WriteLauncher(repository, file, prefix);
         var console = new CliConsole(TextWriter.Null, Console.Error, false, new Dictionary<string, string> { ["READINESS_COMMAND"] = command }, repository, TextReader.Null);
         await new CliApp(console, TimeProvider.System).RunAsync(["hook", "install"], cancellationToken);
+    }
+
+    private static double TimeScript(string script, string workingDirectory, string input)
+    {
+        var info = new System.Diagnostics.ProcessStartInfo(script) { WorkingDirectory = workingDirectory, RedirectStandardInput = true };
+        info.ArgumentList.Add("origin");
+        info.ArgumentList.Add("file:///remote.git");
+        var watch = System.Diagnostics.Stopwatch.StartNew();
+        using var process = System.Diagnostics.Process.Start(info)!;
+        try
+        {
+            process.StandardInput.Write(input);
+            process.StandardInput.Close();
+        }
+        catch (IOException)
+        {
+            // A hook that exits without reading its input (the empty one): git ignores that broken pipe too.
+        }
+
+        process.WaitForExit();
+        return watch.Elapsed.TotalMilliseconds;
     }
 
     /// <summary>The cheapest hook git can run: it starts <c>/bin/sh</c>, which exits at once.</summary>
