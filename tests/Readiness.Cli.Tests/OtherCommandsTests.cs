@@ -29,6 +29,10 @@ public sealed class OtherCommandsTests
         Assert.Equal(0, exit);
         Assert.Contains("https://keepachangelog.com/en/1.1.0/", output, StringComparison.Ordinal);
         Assert.Contains("How to fix", output, StringComparison.Ordinal);
+        Assert.Contains("Settings (in .readiness.yml, or under the check's with: in a checklist):\n  changelog\n", output.ReplaceLineEndings("\n"), StringComparison.Ordinal);
+
+        var (_, registry, _) = await CliHarness.RunAsync(Path.GetTempPath(), "explain", "registry.id-owned");
+        Assert.Contains("known-ids, owners, registry-required", registry, StringComparison.Ordinal);
     }
 
     [Fact]

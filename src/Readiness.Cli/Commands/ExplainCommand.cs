@@ -39,6 +39,13 @@ public sealed class ExplainCommand(Composition composition, CliConsole console)
         console.Out.WriteLine("How to fix a failure:");
         console.Out.WriteLine("  " + d.Fix);
         console.Out.WriteLine();
+        if (d.Settings.Count > 0)
+        {
+            console.Out.WriteLine("Settings (in .readiness.yml, or under the check's with: in a checklist):");
+            console.Out.WriteLine("  " + string.Join(", ", d.Settings));
+            console.Out.WriteLine();
+        }
+
         console.Out.WriteLine($"Standard: {d.Standard.Name} <{d.Standard.Url}>");
         console.Out.WriteLine($"Documentation: checklists/checks/{d.Id}.md");
         return ExitCodes.Ready;

@@ -19,4 +19,7 @@ public sealed record CheckDescriptor(
     string Fix)
 {
     public string Group => Id[..Id.IndexOf('.', StringComparison.Ordinal)];
+
+    /// <summary>The settings the check reads: keys of <c>.readiness.yml</c> or of the checklist's <c>with:</c>.</summary>
+    public IReadOnlyList<string> Settings { get; init; } = [];
 }

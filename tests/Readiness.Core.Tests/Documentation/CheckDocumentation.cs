@@ -22,6 +22,12 @@ internal static class CheckDocumentation
             .Where(x => x.Planned is not null).Select(x => $"`{x.Name}` ({x.Planned!.Severity.Name()})"))).Append(" |\n\n");
         b.Append("## Why it matters\n\n").Append(d.Why).Append("\n\n");
         b.Append("## How to fix a failure\n\n").Append(d.Fix).Append("\n\n");
+        if (d.Settings.Count > 0)
+        {
+            b.Append("## Settings\n\nRead from `.readiness.yml`, or from the check's `with:` in a checklist: ")
+                .Append(string.Join(", ", d.Settings.Select(x => $"`{x}`"))).Append(".\n\n");
+        }
+
         b.Append("## See also\n\n`readiness explain ").Append(d.Id).Append("` prints this page's essentials.\n\n");
         b.Append("<!-- Generated from the check's descriptor; edit the descriptor, then regenerate (DEVELOPERS.md). -->\n");
         return b.ToString();

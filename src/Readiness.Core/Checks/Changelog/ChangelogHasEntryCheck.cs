@@ -27,7 +27,10 @@ public sealed class ChangelogHasEntryCheck : ICheck
         "The changelog is how consumers learn what a version changes; a release missing from it, or dated in the "
         + "future, leaves them guessing whether upgrading is safe.",
         "Move the entries under `## [Unreleased]` into a new section `## [VERSION] - YYYY-MM-DD` (the release date), "
-        + "grouped under ### Added / Changed / Deprecated / Removed / Fixed / Security.");
+        + "grouped under ### Added / Changed / Deprecated / Removed / Fixed / Security.")
+    {
+        Settings = ["changelog"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

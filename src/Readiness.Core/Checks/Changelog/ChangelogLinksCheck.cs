@@ -22,7 +22,10 @@ public sealed class ChangelogLinksCheck : ICheck
         "Readers follow a version's link to the exact changes between two tags; a file that links every version "
         + "but this one (or links it to the wrong comparison) sends them elsewhere.",
         "Add a definition such as `[VERSION]: https://git.example/OWNER/REPO/compare/vPREVIOUS...vVERSION` beside the "
-        + "others at the bottom of the file, and move `[unreleased]` to compare from the new tag.");
+        + "others at the bottom of the file, and move `[unreleased]` to compare from the new tag.")
+    {
+        Settings = ["changelog"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

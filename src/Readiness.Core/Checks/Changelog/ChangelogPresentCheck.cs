@@ -17,7 +17,10 @@ public sealed class ChangelogPresentCheck : ICheck
         "People who depend on the library decide whether and how to upgrade from the changelog; without one they "
         + "must read the commit history.",
         "Add a CHANGELOG.md at the repository root in the Keep a Changelog format (newest version first, an "
-        + "Unreleased section on top), or set `changelog:` in .readiness.yml to the file you keep.");
+        + "Unreleased section on top), or set `changelog:` in .readiness.yml to the file you keep.")
+    {
+        Settings = ["changelog"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

@@ -21,7 +21,10 @@ public sealed class HostCompileOnlyCheck : ICheck
         + "runtime assets pins that version into its users' applications, where it clashes with the host they run.",
         "Add PrivateAssets=\"all\" (the dependency is left out of the package) or ExcludeAssets=\"runtime\" (the "
         + "dependency stays, without its runtime assets) to each host PackageReference; Roslyn components reference "
-        + "Microsoft.CodeAnalysis* with PrivateAssets=\"all\".");
+        + "Microsoft.CodeAnalysis* with PrivateAssets=\"all\".")
+    {
+        Settings = ["host-packages"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

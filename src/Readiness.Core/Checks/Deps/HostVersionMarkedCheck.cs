@@ -22,7 +22,10 @@ public sealed class HostVersionMarkedCheck : ICheck
         "Users pick a plugin by the host version they run. When the number in the package id (or version) and the "
         + "host version the plugin was built against disagree, they install a plugin that fails inside their host.",
         "Make the host reference resolve to the major version the package id (or version suffix) carries, or rename "
-        + "the package for the host major it now targets.");
+        + "the package for the host major it now targets.")
+    {
+        Settings = ["host-packages", "host-marker"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

@@ -24,7 +24,10 @@ public sealed class LicenseDeclaredCheck : ICheck
         "Consumers' tools and policies read the package's license metadata to decide whether they may use it; a "
         + "missing, malformed or deprecated declaration makes the package unusable where licenses are audited.",
         "Set <PackageLicenseExpression> to an SPDX expression such as MIT or Apache-2.0, or pack the license text and "
-        + "name it with <PackageLicenseFile>; remove <PackageLicenseUrl>.");
+        + "name it with <PackageLicenseFile>; remove <PackageLicenseUrl>.")
+    {
+        Settings = ["publish-to"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

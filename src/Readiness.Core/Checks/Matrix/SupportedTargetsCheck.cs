@@ -25,7 +25,10 @@ public sealed class SupportedTargetsCheck : ICheck
         "A target whose runtime is out of support gets no security fixes; shipping for it invites users to stay on it, "
         + "and the SDK warns about it (NETSDK1138).",
         "Drop the out-of-support targets from TargetFrameworks (net8.0 or later, plus netstandard2.0 for breadth, is "
-        + "the current library guidance), or release before the end-of-support date.");
+        + "the current library guidance), or release before the end-of-support date.")
+    {
+        Settings = ["require-targets"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

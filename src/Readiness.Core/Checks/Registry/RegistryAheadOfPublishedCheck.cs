@@ -19,7 +19,10 @@ public sealed class RegistryAheadOfPublishedCheck : ICheck
         "Consumers' tools pick the highest version that satisfies a range; a release below an already published version "
         + "of the same line is never chosen by a floating or open range, and usually means a version bump was forgotten.",
         "Release a version above the newest published one; for a patch release of an older line, declare the line under "
-        + "maintenance-lines (e.g. [\"2.3.x\"]) in .readiness.yml.");
+        + "maintenance-lines (e.g. [\"2.3.x\"]) in .readiness.yml.")
+    {
+        Settings = ["maintenance-lines", "registry-required"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

@@ -15,7 +15,10 @@ public sealed class RegistryDependenciesCurrentCheck : ICheck
         Standards.NuGetDependencies,
         "Consumers who also use a newer major of the same dependency get a conflict (or a silent upgrade past what the "
         + "package was tested with); old majors also stop receiving fixes.",
-        "Move the dependency to a current major (or widen the range), and test against it.");
+        "Move the dependency to a current major (or widen the range), and test against it.")
+    {
+        Settings = ["registry-required"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

@@ -18,7 +18,10 @@ public sealed class RegistryDependenciesPublishedCheck : ICheck
         "A package that depends on an id or version the consumers' feed does not have cannot be restored (NU1101, "
         + "NU1102), or restores a different version than the one it was built and tested against (NU1603).",
         "Publish the dependency first, reference a version that is published, or mark a build-only reference "
-        + "PrivateAssets=\"all\" so it stays out of the package.");
+        + "PrivateAssets=\"all\" so it stays out of the package.")
+    {
+        Settings = ["registry-required"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

@@ -20,7 +20,10 @@ public sealed class RegistryIdOwnedCheck : ICheck
         "Package ids are unique per registry and case-insensitive. If someone else published the id first, the push is "
         + "refused — or, worse, a version ships under a name consumers already trust for something else.",
         "If the id is yours, list it under known-ids (or your registry account under owners) in .readiness.yml; "
-        + "otherwise choose an id nobody has published.");
+        + "otherwise choose an id nobody has published.")
+    {
+        Settings = ["known-ids", "owners", "registry-required"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

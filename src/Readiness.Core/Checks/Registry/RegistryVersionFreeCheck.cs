@@ -15,7 +15,10 @@ public sealed class RegistryVersionFreeCheck : ICheck
         + "restored the first one would never see the second. Finding out at push time means a tag and release notes "
         + "that name a version that can never ship.",
         "Choose the next version (and move the changelog entry and the tag with it). NuGet compares versions after "
-        + "normalising them, so 1.0 and 1.0.0 are the same version to the registry.");
+        + "normalising them, so 1.0 and 1.0.0 are the same version to the registry.")
+    {
+        Settings = ["registry-required"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

@@ -12,7 +12,10 @@ public sealed class SigningCommitCheck : ICheck
         Standards.GitSignature,
         "A signed commit ties the released content to its author's key, not only the tag that names it.",
         "Sign commits ('git commit -S', or commit.gpgsign=true; gpg.format=ssh for SSH keys) with a key listed in "
-        + "the allowed-signers file; create, store and rotate signing keys as your organisation's security policy says.");
+        + "the allowed-signers file; create, store and rotate signing keys as your organisation's security policy says.")
+    {
+        Settings = ["allowed-signers"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

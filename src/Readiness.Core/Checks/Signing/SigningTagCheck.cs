@@ -17,7 +17,10 @@ public sealed class SigningTagCheck : ICheck
         + "the release. A lightweight tag is only a pointer: it carries no tagger, date or signature.",
         "Create the tag with 'git tag -s' (annotated and signed; for SSH keys set gpg.format=ssh and user.signingkey), "
         + "list the maintainers' public keys in the allowed-signers file, then push the tag again; create, store and "
-        + "rotate signing keys as your organisation's security policy says.");
+        + "rotate signing keys as your organisation's security policy says.")
+    {
+        Settings = ["allowed-signers"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {

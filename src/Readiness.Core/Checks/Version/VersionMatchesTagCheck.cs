@@ -14,7 +14,10 @@ public sealed class VersionMatchesTagCheck : ICheck
         Standards.NuGetVersioning,
         "The tag is what people and tools read as the release; the package carries the version the project declares. "
         + "When they differ, the published package and the tagged source disagree, and the next release's numbering breaks.",
-        "Set the version in the project (PackageVersion, Version or VersionPrefix) to the tag's version, or move the tag.");
+        "Set the version in the project (PackageVersion, Version or VersionPrefix) to the tag's version, or move the tag.")
+    {
+        Settings = ["tag-pattern"],
+    };
 
     public IEnumerable<Finding> Run(CheckContext context)
     {
