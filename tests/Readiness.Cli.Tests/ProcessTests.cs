@@ -8,9 +8,12 @@ public sealed class ProcessTests
 {
     public static string Program => Path.Combine(AppContext.BaseDirectory, OperatingSystem.IsWindows() ? "readiness.exe" : "readiness");
 
-    public static (int Exit, string Out, string Error) Run(string directory, params string[] args)
+    public static (int Exit, string Out, string Error) Run(string directory, params string[] args) => RunProgram(Program, directory, args);
+
+    /// <summary>Runs a readiness program (this build's, or an installed one) without colour, bounded to 60 seconds.</summary>
+    public static (int Exit, string Out, string Error) RunProgram(string program, string directory, params string[] args)
     {
-        var info = new ProcessStartInfo(Program) { WorkingDirectory = directory, RedirectStandardOutput = true, RedirectStandardError = true };
+        var info = new ProcessStartInfo(program) { WorkingDirectory = directory, RedirectStandardOutput = true, RedirectStandardError = true };
         foreach (var a in args)
         {
             info.ArgumentList.Add(a);

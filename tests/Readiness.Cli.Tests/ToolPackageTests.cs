@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using System.IO.Compression;
 using Readiness.Testing;
 
@@ -16,7 +15,7 @@ public sealed class ToolPackageTests : IDisposable
     [Fact]
     public void PackedTool_InstallsFromAFolderFeed_AndItsHookBlocksATagThatIsNotReady()
     {
-        var root = RepositoryRoot();
+        var root = RepositoryRoot.Path;
         var configuration = new DirectoryInfo(Path.TrimEndingDirectorySeparator(AppContext.BaseDirectory)).Parent!.Name; // bin/<Configuration>/net10.0/
         var feed = scratch.Combine("feed");
         Dotnet(root, "pack", Path.Combine(root, "src", "Readiness.Cli", "Readiness.Cli.csproj"), "-c", configuration, "--no-build", "-o", feed);
@@ -54,7 +53,7 @@ public sealed class ToolPackageTests : IDisposable
         using var repo = SampleLibrary.ReadyRelease("1.2.0");
         using var remote = TestRepository.Bare();
         repo.Git("remote", "add", "origin", remote.Path);
-        var (exit, output, error) = Run(installed, repo.Path, "hook", "install");
+        var (exit, output, error) = ProcessTests.RunProgram(installed, repo.Path, "hook", "install");
         Assert.True(exit == 0, output + error);
         Assert.Equal(
             File.ReadAllText(Path.Combine(root, "hooks", "pre-push")),
@@ -77,40 +76,11 @@ public sealed class ToolPackageTests : IDisposable
 
     public void Dispose() => scratch.Dispose();
 
-    private static string RepositoryRoot()
-    {
-        for (var folder = new DirectoryInfo(AppContext.BaseDirectory); folder is not null; folder = folder.Parent)
-        {
-            if (File.Exists(Path.Combine(folder.FullName, "Readiness.sln")))
-            {
-                return folder.FullName;
-            }
-        }
-
-        throw new InvalidOperationException("Readiness.sln was not found above " + AppContext.BaseDirectory);
-    }
-
     private void Dotnet(string directory, params string[] args)
     {
         // A private package cache for the install: an earlier run's package of the same version must not be reused.
         var environment = args[0] == "tool" ? new Dictionary<string, string> { ["NUGET_PACKAGES"] = scratch.Combine("packages") } : null;
         var result = DotnetCli.Run(directory, args, environment);
         Assert.True(result.Succeeded, $"dotnet {string.Join(' ', args)} failed ({result.ExitCode}):\n{result.Log}");
-    }
-
-    private static (int Exit, string Out, string Error) Run(string program, string directory, params string[] args)
-    {
-        var info = new ProcessStartInfo(program) { WorkingDirectory = directory, RedirectStandardOutput = true, RedirectStandardError = true };
-        foreach (var a in args)
-        {
-            info.ArgumentList.Add(a);
-        }
-
-        info.Environment["NO_COLOR"] = "1";
-        using var process = Process.Start(info)!;
-        var output = process.StandardOutput.ReadToEndAsync();
-        var error = process.StandardError.ReadToEndAsync();
-        Assert.True(process.WaitForExit(300_000), $"{program} did not finish within 5 minutes");
-        return (process.ExitCode, output.Result, error.Result);
     }
 }

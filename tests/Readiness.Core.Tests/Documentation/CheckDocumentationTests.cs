@@ -1,6 +1,7 @@
 using Readiness.Core.Checklists;
 using Readiness.Core.Checks;
 using Readiness.Core.Engine;
+using Readiness.Testing;
 
 namespace Readiness.Core.Tests.Documentation;
 

@@ -1,6 +1,7 @@
 using System.Text.RegularExpressions;
 using Readiness.Core.Configuration;
 using Readiness.Core.Engine;
+using Readiness.Testing;
 
 namespace Readiness.Core.Tests.Documentation;
 

@@ -64,7 +64,7 @@ public sealed class RulesTests : ServiceTestBase
         Assert.Equal("application/yaml", bramble.Content.Headers.ContentType?.MediaType);
         Assert.Equal(Checklist, await bramble.Content.ReadAsStringAsync());
         var library = await (await Host.GetAsync("/api/checklists/library")).Content.ReadAsStringAsync();
-        Assert.Equal(File.ReadAllText(Path.Combine(RepositoryRoot(), "checklists", "library.yml")), library);
+        Assert.Equal(File.ReadAllText(Path.Combine(RepositoryRoot.Path, "checklists", "library.yml")), library);
         Assert.Equal(System.Net.HttpStatusCode.NotFound, (await Host.GetAsync("/api/checklists/no-such")).StatusCode);
         Assert.Equal(System.Net.HttpStatusCode.NotFound, (await Host.GetAsync("/api/checklists/..%2Fsecrets")).StatusCode);
     }
@@ -81,16 +81,5 @@ public sealed class RulesTests : ServiceTestBase
         return doc.RootElement.GetProperty("results").EnumerateArray()
             .Select(r => (r.GetProperty("check").GetString()!, r.GetProperty("status").GetString()!, r.GetProperty("severity").GetString()!))
             .ToList();
-    }
-
-    private static string RepositoryRoot()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "Readiness.sln")))
-        {
-            dir = dir.Parent;
-        }
-
-        return dir?.FullName ?? throw new InvalidOperationException("repository root not found");
     }
 }

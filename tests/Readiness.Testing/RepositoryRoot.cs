@@ -1,7 +1,7 @@
-namespace Readiness.Core.Tests;
+namespace Readiness.Testing;
 
 /// <summary>Finds this solution's own folder (the one holding Readiness.sln) from the test binaries.</summary>
-internal static class RepositoryRoot
+public static class RepositoryRoot
 {
     public static string Path
     {
