@@ -1,6 +1,6 @@
 using System.CommandLine;
-using Readiness.Core.Reports;
 using Readiness.Core.Configuration;
+using Readiness.Core.Reports;
 
 namespace Readiness.Cli.Commands;
 
