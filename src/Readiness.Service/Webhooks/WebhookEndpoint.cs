@@ -9,7 +9,7 @@ namespace Readiness.Service.Webhooks;
 /// <c>POST /hooks/github</c>: checks the signature, records the delivery once, queues a job for release-relevant
 /// pull request events and answers at once; the worker does the rest.
 /// </summary>
-public sealed class WebhookEndpoint(ServiceSettings settings, JobStore jobs, JobSignal signal, ILogger<WebhookEndpoint> logger)
+public sealed class WebhookEndpoint(ServiceSettings settings, IJobStore jobs, JobSignal signal, ILogger<WebhookEndpoint> logger)
 {
     public const string Path = "/hooks/github";
     public const string EventHeader = "X-GitHub-Event";
@@ -67,6 +67,10 @@ public sealed class WebhookEndpoint(ServiceSettings settings, JobStore jobs, Job
         {
             case EnqueueOutcome.Duplicate:
                 return Results.Json(new { status = "duplicate" }, statusCode: StatusCodes.Status200OK);
+            case EnqueueOutcome.QueueFull:
+                logger.LogWarning("Refused delivery {Delivery}: the queue of {Repository} is full", Safe(delivery), request?.Repository);
+                context.Response.Headers.RetryAfter = "60";
+                return Results.Json(new { error = $"the queue of {request?.Repository} is full; redeliver later" }, statusCode: StatusCodes.Status503ServiceUnavailable);
             case EnqueueOutcome.Ignored:
                 return Results.Json(new { status = eventName == "ping" ? "pong" : "ignored" }, statusCode: StatusCodes.Status202Accepted);
             default:

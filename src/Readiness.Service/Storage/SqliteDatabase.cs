@@ -7,7 +7,7 @@ namespace Readiness.Service.Storage;
 /// The service's SQLite file (WAL mode): deliveries seen, jobs, runs. Writes go through one writer thread in
 /// batched transactions; reads run beside them on their own connections.
 /// </summary>
-public sealed class Database : IDisposable
+public sealed class SqliteDatabase : IDisposable
 {
     private const string Schema = """
         CREATE TABLE IF NOT EXISTS deliveries(
@@ -65,7 +65,7 @@ public sealed class Database : IDisposable
     private Thread? writer;
     private Timer? checkpoints;
 
-    public Database(string path)
+    public SqliteDatabase(string path)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
         Path = path;
@@ -121,7 +121,7 @@ public sealed class Database : IDisposable
         var write = new Write<T>(work);
         if (!writes.Writer.TryWrite(write))
         {
-            throw new ObjectDisposedException(nameof(Database));
+            throw new ObjectDisposedException(nameof(SqliteDatabase));
         }
 
         return write.Task;
