@@ -72,7 +72,7 @@ public static class ServiceApp
                 : ActivatorUtilities.CreateInstance<AppInstallationCredentials>(sp);
         });
         services.AddSingleton<IForge, OctokitForge>();
-        services.AddSingleton(sp => new MirrorStore(sp.GetRequiredService<ServiceSettings>().MirrorFolder));
+        services.AddSingleton(sp => new MirrorStore(sp.GetRequiredService<ServiceSettings>().MirrorFolder, sp.GetRequiredService<ServiceSettings>().CloneHost));
 
         services.AddSingleton<BuiltInChecklists>();
         services.AddSingleton<IChecklistSource>(sp =>
@@ -91,6 +91,7 @@ public static class ServiceApp
         services.AddSingleton(_ => new ReportDocuments([new MarkdownRenderer(), new JsonRenderer(), new HtmlRenderer()], JsonReportReader.Parse));
         services.AddSingleton<PullRequestJobProcessor>();
         services.AddHostedService<JobWorker>();
+        services.AddHostedService<RetentionService>();
 
         services.AddSingleton<WebhookEndpoint>();
         services.AddSingleton<HomePage>();

@@ -14,6 +14,14 @@ public sealed class ServiceSettings
     /// <summary>The forge's API base URL.</summary>
     public required Uri ForgeApiUrl { get; init; }
 
+    /// <summary>
+    /// The only host clone URLs may name (<c>Readiness:Forge:CloneHost</c>; by default the API's host, without a
+    /// leading <c>api.</c>): the forge's token is offered to no other.
+    /// </summary>
+    public string CloneHost => ConfiguredCloneHost ?? (ForgeApiUrl.Host.StartsWith("api.", StringComparison.OrdinalIgnoreCase) ? ForgeApiUrl.Host[4..] : ForgeApiUrl.Host);
+
+    public string? ConfiguredCloneHost { get; init; }
+
     /// <summary>A plain token, for setups without an app.</summary>
     public string? ForgeToken { get; init; }
 
@@ -187,6 +195,7 @@ public sealed class ServiceSettings
         {
             ForgeApiUrl = apiUrl,
             ForgeToken = token,
+            ConfiguredCloneHost = NullIfBlank(c["Forge:CloneHost"]),
             AppId = appId,
             AppPrivateKeyPem = pem,
             WebhookSecret = secret,
