@@ -31,6 +31,12 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
             return ExitCodes.Usage;
         }
 
+        if (console.Env(DocsUrlVariable) is { } docs && !CheckPages.IsValidBase(docs))
+        {
+            await console.Error.WriteLineAsync($"readiness: {DocsUrlVariable} must be an absolute http(s) URL, not '{docs}'").ConfigureAwait(false);
+            return ExitCodes.Usage;
+        }
+
         var request = await BuildRequestAsync(parse, console.FullPath(path ?? "."), cancellationToken).ConfigureAwait(false);
         var report = await composition.Runner.RunAsync(request, Registries(parse), cancellationToken).ConfigureAwait(false);
         await WriteReportAsync(report, parse.GetValue(options.Format), parse.GetValue(options.Output), cancellationToken).ConfigureAwait(false);
@@ -85,7 +91,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         ArgumentNullException.ThrowIfNull(report);
         var chosen = format ?? (output is not null ? FormatFromExtension(output) : console.IsTerminal ? "text" : "markdown");
         var color = output is null && ConsoleColorPolicy.ShouldUseColor(console.IsTerminal, new Dictionary<string, string>(console.Environment));
-        var renderer = new RendererCatalog(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
+        var renderer = Renderers(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
         if (output is null)
         {
             renderer.Render(report, console.Out);
@@ -103,6 +109,12 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         _ = cancellationToken;
     }
 
+    /// <summary>The renderers, with the check descriptors and the check pages' address (<c>READINESS_DOCS_URL</c>).</summary>
+    public RendererCatalog Renderers(bool color = false) =>
+        new(color, checks: composition.Catalog, pages: new CheckPages(console.Env(DocsUrlVariable)));
+
+    public const string DocsUrlVariable = "READINESS_DOCS_URL";
+
     public static string Summary(Report report)
     {
         ArgumentNullException.ThrowIfNull(report);
@@ -114,6 +126,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
     private static string FormatFromExtension(string output) => Path.GetExtension(output).ToLowerInvariant() switch
     {
         ".json" => "json",
+        ".sarif" => "sarif",
         ".html" or ".htm" => "html",
         ".md" or ".markdown" => "markdown",
         _ => "text",
