@@ -16,7 +16,7 @@ public sealed class RendererCatalog
         renderers =
         [
             new TextRenderer(color, verbose), new MarkdownRenderer(), new HtmlRenderer(), new JsonRenderer(),
-            new SarifRenderer(checks, pages),
+            new SarifRenderer(checks, pages), new JunitRenderer(),
         ];
     }
 

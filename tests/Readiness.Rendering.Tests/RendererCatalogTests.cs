@@ -5,8 +5,8 @@ public sealed class RendererCatalogTests
     [Fact]
     public void Formats_AreTheOnesTheCommandLineOffers()
     {
-        // cli.md: --format text|markdown|html|json, and the CI formats sarif (issue 17).
-        Assert.Equal(["text", "markdown", "html", "json", "sarif"], new RendererCatalog().Formats);
+        // cli.md: --format text|markdown|html|json, and the CI formats sarif and junit.
+        Assert.Equal(["text", "markdown", "html", "json", "sarif", "junit"], new RendererCatalog().Formats);
     }
 
     [Theory]
@@ -16,6 +16,7 @@ public sealed class RendererCatalogTests
     [InlineData("json", typeof(JsonRenderer))]
     [InlineData("JSON", typeof(JsonRenderer))]
     [InlineData("sarif", typeof(SarifRenderer))]
+    [InlineData("junit", typeof(JunitRenderer))]
     public void Find_ReturnsTheRendererOfTheFormat(string format, Type type)
     {
         var renderer = new RendererCatalog().Find(format);

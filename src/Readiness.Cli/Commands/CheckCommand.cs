@@ -127,6 +127,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
     {
         ".json" => "json",
         ".sarif" => "sarif",
+        ".xml" => "junit",
         ".html" or ".htm" => "html",
         ".md" or ".markdown" => "markdown",
         _ => "text",
