@@ -26,7 +26,7 @@ public sealed class CheckOptions
 
     public Option<string?> Registry { get; } = new("--registry") { Description = "NuGet feed (service index URL or local folder) to check against" };
 
-    public Option<int> RegistryTimeout { get; } = new("--registry-timeout") { Description = "Seconds allowed for the whole registry phase", DefaultValueFactory = _ => 10 };
+    public Option<double?> RegistryTimeout { get; } = new("--registry-timeout") { Description = "Seconds allowed for the whole registry phase, 1 to 60 (default: READINESS_REGISTRY_TIMEOUT, else registry-timeout in .readiness.yml, else 10)" };
 
     public Option<bool> NoCache { get; } = new("--no-cache") { Description = "Do not use the on-disk registry cache" };
 
