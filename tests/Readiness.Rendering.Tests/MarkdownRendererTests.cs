@@ -157,7 +157,7 @@ public sealed class MarkdownRendererTests
             Assert.Equal(result.Check, cells[2]);
             Assert.Equal(result.Package ?? string.Empty, cells[3]);
             Assert.Equal(Flatten(result.Message), cells[4]);
-            Assert.Equal(string.Join(", ", result.Evidence.Select(e => e.ToString().Replace('\u001b', '\uFFFD').Replace('\u0007', '\uFFFD'))), cells[5]);
+            Assert.Equal(string.Join(", ", result.Evidence.Select(e => e.ToString().Replace("\u001b", "\\x1B", StringComparison.Ordinal).Replace("\u0007", "\\x07", StringComparison.Ordinal))), cells[5]);
         }
 
         var secrets = report.Results[0];
