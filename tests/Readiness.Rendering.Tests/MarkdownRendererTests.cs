@@ -190,7 +190,7 @@ public sealed class MarkdownRendererTests
         Assert.All(rows, r => Assert.Equal(4, r.Count));
         var expected = Judged(report).Select(result => string.Join("\n", result.Check, result.Package ?? string.Empty,
             (result.Status == CheckStatus.Error ? "could not judge: " : string.Empty) + Flatten(result.Message),
-            string.Join(", ", result.Evidence.Select(e => e.ToString().Replace('\u001b', '\uFFFD').Replace('\u0007', '\uFFFD'))))).Order(StringComparer.Ordinal);
+            string.Join(", ", result.Evidence.Select(e => e.ToString().Replace("\u001b", "\\x1B", StringComparison.Ordinal).Replace("\u0007", "\\x07", StringComparison.Ordinal))))).Order(StringComparer.Ordinal);
         Assert.Equal(expected, rows.Select(r => string.Join("\n", r.Cast<TableCell>().Select(CellText))).Order(StringComparer.Ordinal));
 
         var secrets = report.Results[0];

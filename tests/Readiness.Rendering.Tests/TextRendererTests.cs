@@ -152,7 +152,8 @@ public sealed partial class TextRendererTests
 
         Assert.DoesNotContain(Escape, plain);
         Assert.DoesNotContain('\u0007', plain);
-        Assert.Contains("at evil\uFFFD]0;pwned\uFFFD\uFFFD[2J.txt", plain, StringComparison.Ordinal);
+        // Shown as visible escapes (\xHH), so the reader sees what the name really holds.
+        Assert.Contains("at evil\\x1B]0;pwned\\x07\\x1B[2J.txt", plain, StringComparison.Ordinal);
         Assert.Equal(colored.Count(c => c == Escape), SgrSequence().Matches(colored).Count);
     }
 

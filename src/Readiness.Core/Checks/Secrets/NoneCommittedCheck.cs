@@ -31,11 +31,13 @@ public sealed class NoneCommittedCheck : ICheck
         ArgumentNullException.ThrowIfNull(context);
         var result = SecretScanner.Scan(context.Snapshot.Files);
         var extra = Notes(result);
+        var scanned = $"{result.TextFiles + result.BinaryFiles} tracked files ({result.TextFiles} scanned as text, {result.BinaryFiles} binary checked by name and format)";
         if (result.Hits.Count == 0)
         {
-            yield return Finding.Pass(
-                $"No secret found in {result.TextFiles + result.BinaryFiles} tracked files ({result.TextFiles} scanned as text, "
-                + $"{result.BinaryFiles} binary checked by name and format).{extra}");
+            // A file that could not be scanned may hold anything: the check cannot pass on it.
+            yield return extra.Length == 0
+                ? Finding.Pass($"No secret found in {scanned}.")
+                : Finding.Error($"No secret found in {scanned}, but not every file could be scanned:{extra}", null, [.. Gaps(result)]);
             yield break;
         }
 
@@ -62,9 +64,12 @@ public sealed class NoneCommittedCheck : ICheck
 
         if (extra.Length > 0)
         {
-            yield return Finding.Skip("Not every file could be scanned:" + extra);
+            yield return Finding.Error("Not every file could be scanned:" + extra, null, [.. Gaps(result)]);
         }
     }
+
+    private static IEnumerable<Evidence> Gaps(SecretScanResult result) =>
+        result.TooLarge.Take(MaxLinesPerFile).Select(p => new Evidence(p));
 
     private static string Notes(SecretScanResult result)
     {
