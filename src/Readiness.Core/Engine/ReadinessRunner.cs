@@ -41,8 +41,10 @@ public sealed class ReadinessRunner(
         var config = request.Config ?? ReadConfig(snapshot.Files);
         var resolver = Resolver;
         var definition = request.Checklist
-            ?? resolver.Load(request.ChecklistName ?? config.Checklist ?? DefaultChecklist,
-                config.Checklist is not null && request.ChecklistName is null ? config.Values["checklist"].Mark : null);
+            ?? (request.ChecklistName is null && config.Checklist is { } own && RepositoryChecklist.IsPath(own)
+                ? RepositoryChecklist.Load(snapshot.Files, own, config.Values["checklist"].Mark, Parser)
+                : resolver.Load(request.ChecklistName ?? config.Checklist ?? DefaultChecklist,
+                    config.Checklist is not null && request.ChecklistName is null ? config.Values["checklist"].Mark : null));
         var checklist = resolver.Resolve(definition, config);
         var packs = PackCommands.Read(snapshot.Files);
         var model = PackageSelection.Apply(projectReader.Read(snapshot.Files), packs, config);
@@ -68,7 +70,7 @@ public sealed class ReadinessRunner(
                     : await RegistryPhase.GatherAsync(
                         registry,
                         RegistryIds(model),
-                        RegistryPhase.TimeoutFrom(config, request.RegistryTimeout ?? RegistryPhase.DefaultTimeout),
+                        RegistryPhase.Resolve(request.RegistryTimeout, config),
                         cancellationToken).ConfigureAwait(false);
             }
             finally
