@@ -221,6 +221,37 @@ public sealed class ConventionVerdictTests
         Assert.Equal("pass", Result(output, "version.well-formed", "Bramble.Sketches").GetProperty("status").GetString());
     }
 
+    [Fact]
+    public async Task PlainTextChangelogInDocs_WithSpelledOutDates_HasTheEntry()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02")
+            .Delete("CHANGELOG.md")
+            .Write("docs/History.txt", "Version 1.2.0 - 2 Nov 2026\nMerge of sketches (#12)\n\n1.1.0 (2026-10-01)\nFirst sketches\n")
+            .Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (exit, output, error) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        // Keep a Changelog 1.1.0 asks for a dated section per version; the plain-text form carries the same facts.
+        Assert.True(exit == 0, output + error);
+        Assert.Contains("docs/History.txt:1", Result(output, "changelog.has-entry").GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task NotesInForgeReleases_SkipWithThatReasonOffline()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02").Delete("CHANGELOG.md").Write(".readiness.yml", "changelog: forge-releases\n").Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (_, output, _) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        var present = Result(output, "changelog.present");
+        Assert.Equal("skip", present.GetProperty("status").GetString());
+        Assert.Contains("forge's releases", present.GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
     internal static IReadOnlyList<string> Notes(string json)
     {
         using var document = JsonDocument.Parse(json);

@@ -24,6 +24,7 @@ public sealed class RepositoryConfigParser(ChecklistParser checklists)
         "registry-timeout",
         "release-branches",
         "require-targets",
+        "strong-name-key-private",
         "tag-pattern",
     ];
 

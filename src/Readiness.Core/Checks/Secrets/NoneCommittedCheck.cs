@@ -24,13 +24,38 @@ public sealed class NoneCommittedCheck : ICheck
         Standards.NuGetConfig,
         "Anything committed reaches every clone, fork and mirror, and stays in history. A key or token in a public "
         + "repository is found by automated scanners within minutes.",
-        Advice);
+        Advice)
+    {
+        Settings = [PrivateStrongNameKey],
+    };
+
+    /// <summary>Set true when the repository's strong-name key must stay private (it then blocks like any key).</summary>
+    public const string PrivateStrongNameKey = "strong-name-key-private";
 
     public IEnumerable<Finding> Run(CheckContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
-        var result = SecretScanner.Scan(context.Snapshot.Files);
-        var extra = Notes(result);
+        var scanned = SecretScanner.Scan(context.Snapshot.Files);
+        var extra = Notes(scanned);
+        var result = scanned;
+        if (!context.Parameters.Bool(PrivateStrongNameKey))
+        {
+            // .NET library guidance (strong naming) recommends committing the key pair of an open-source library so
+            // that anyone can build it: it identifies, it does not secure. Information, unless configured private.
+            var keys = scanned.Hits.Where(h => h.Kind == KeyFiles.StrongNameKeyPair).ToList();
+            foreach (var key in keys)
+            {
+                yield return Finding.Pass(
+                    $"{key.Path} is a strong-name key pair: committing it is documented practice for open-source libraries "
+                    + $"(.NET library guidance, strong naming), so it is reported, not judged as a secret; set {PrivateStrongNameKey}: true "
+                    + "if your organisation's security policy keeps it private.",
+                    null,
+                    new Evidence(key.Path));
+            }
+
+            result = scanned with { Hits = scanned.Hits.Except(keys).ToList() };
+        }
+
         if (result.Hits.Count == 0)
         {
             yield return Finding.Pass(
