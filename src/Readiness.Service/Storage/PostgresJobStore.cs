@@ -62,10 +62,10 @@ public sealed class PostgresJobStore(PostgresDatabase database, TimeProvider tim
         return ChangeAsync(JobSql.Finish, c => c.With("@state", state).With("@run", runId).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner), cancellationToken);
     }
 
-    public Task<bool> RequeueAsync(long jobId, string owner, TimeSpan delay, string? error, CancellationToken cancellationToken)
+    public Task<bool> RequeueAsync(long jobId, string owner, TimeSpan delay, string? error, CancellationToken cancellationToken, bool countAttempt = true)
     {
         var now = Now();
-        return ChangeAsync(JobSql.Requeue, c => c.With("@due", now + (long)delay.TotalMilliseconds).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner), cancellationToken);
+        return ChangeAsync(JobSql.Requeue, c => c.With("@due", now + (long)delay.TotalMilliseconds).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner).With("@refund", countAttempt ? 0 : 1), cancellationToken);
     }
 
     public bool HasNewer(Job job)

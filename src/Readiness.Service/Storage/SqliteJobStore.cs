@@ -43,10 +43,10 @@ public sealed class SqliteJobStore(SqliteDatabase database, TimeProvider time, J
         return Change(JobSql.Finish, c => c.With("@state", state).With("@run", runId).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner), cancellationToken);
     }
 
-    public Task<bool> RequeueAsync(long jobId, string owner, TimeSpan delay, string? error, CancellationToken cancellationToken)
+    public Task<bool> RequeueAsync(long jobId, string owner, TimeSpan delay, string? error, CancellationToken cancellationToken, bool countAttempt = true)
     {
         var now = Now();
-        return Change(JobSql.Requeue, c => c.With("@due", now + (long)delay.TotalMilliseconds).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner), cancellationToken);
+        return Change(JobSql.Requeue, c => c.With("@due", now + (long)delay.TotalMilliseconds).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner).With("@refund", countAttempt ? 0 : 1), cancellationToken);
     }
 
     public bool HasNewer(Job job)
