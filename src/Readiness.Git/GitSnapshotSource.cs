@@ -99,16 +99,7 @@ public sealed class GitSnapshotSource : ISnapshotSource
             throw new RepositoryInspectionException($"{full} does not exist or is not a folder.");
         }
 
-        string? gitDirectory;
-        try
-        {
-            gitDirectory = Repository.Discover(full);
-        }
-        catch (LibGit2SharpException e)
-        {
-            throw new RepositoryInspectionException($"{full} is not a git repository: {OneLine(e.Message)}", e);
-        }
-
+        var gitDirectory = RepositoryDiscovery.Find(full);
         if (gitDirectory is null)
         {
             throw new RepositoryInspectionException($"{full} is not a git repository (nor any of its parent folders).");
@@ -206,19 +197,8 @@ public sealed class GitSnapshotSource : ISnapshotSource
         }
     }
 
-    private static SignatureBlock? CommitSignature(Repository repository, Commit commit)
-    {
-        try
-        {
-            var info = Commit.ExtractSignature(repository, commit.Id);
-            return SignatureBlock.FromArmored(info.Signature);
-        }
-        catch (NotFoundException)
-        {
-            // libgit2 reports an unsigned commit as "not found".
-            return null;
-        }
-    }
+    private static SignatureBlock? CommitSignature(Repository repository, Commit commit) =>
+        CommitSignatureReader.Read(Path.TrimEndingDirectorySeparator(repository.Info.Path), commit.Sha);
 
     internal static string OneLine(string message) =>
         string.Join(' ', message.Split(['\r', '\n'], StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));

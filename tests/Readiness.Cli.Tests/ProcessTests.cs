@@ -6,7 +6,7 @@ namespace Readiness.Cli.Tests;
 /// <summary>The built program as a separate process: exit codes and the redirected-output default format.</summary>
 public sealed class ProcessTests
 {
-    public static string Program => Path.Combine(AppContext.BaseDirectory, OperatingSystem.IsWindows() ? "readiness.exe" : "readiness");
+    public static string Program => CliHarness.Program;
 
     public static (int Exit, string Out, string Error) Run(string directory, params string[] args) => RunProgram(Program, directory, args);
 

@@ -31,6 +31,12 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
             return ExitCodes.Usage;
         }
 
+        if (console.Env(DocsUrlVariable) is { } docs && !CheckPages.IsValidBase(docs))
+        {
+            await console.Error.WriteLineAsync($"readiness: {DocsUrlVariable} must be an absolute http(s) URL, not '{docs}'").ConfigureAwait(false);
+            return ExitCodes.Usage;
+        }
+
         if (parse.GetValue(options.Registry) is { } registry && !registry.Contains("://", StringComparison.Ordinal) && !Directory.Exists(console.FullPath(registry)))
         {
             await console.Error.WriteLineAsync($"readiness: --registry {registry}: no such folder ({console.FullPath(registry)}); give a local folder feed or a service index URL").ConfigureAwait(false);
@@ -138,7 +144,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         ArgumentNullException.ThrowIfNull(report);
         var chosen = format ?? (output is not null ? FormatFromExtension(output) : console.IsTerminal ? "text" : "markdown");
         var color = output is null && ConsoleColorPolicy.ShouldUseColor(console.IsTerminal, new Dictionary<string, string>(console.Environment));
-        var renderer = new RendererCatalog(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
+        var renderer = Renderers(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
         if (output is null)
         {
             renderer.Render(report, console.Out);
@@ -156,6 +162,12 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         _ = cancellationToken;
     }
 
+    /// <summary>The renderers, with the check descriptors and the check pages' address (<c>READINESS_DOCS_URL</c>).</summary>
+    public RendererCatalog Renderers(bool color = false) =>
+        new(color, checks: composition.Catalog, pages: new CheckPages(console.Env(DocsUrlVariable)));
+
+    public const string DocsUrlVariable = "READINESS_DOCS_URL";
+
     public static string Summary(Report report)
     {
         ArgumentNullException.ThrowIfNull(report);
@@ -167,6 +179,8 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
     private static string FormatFromExtension(string output) => Path.GetExtension(output).ToLowerInvariant() switch
     {
         ".json" => "json",
+        ".sarif" => "sarif",
+        ".xml" => "junit",
         ".html" or ".htm" => "html",
         ".md" or ".markdown" => "markdown",
         _ => "text",
