@@ -144,5 +144,6 @@ public static class ServiceApp
         app.MapPost("/api/runs", (HttpContext c, RunsApi a) => a.PostAsync(c));
         app.MapGet("/healthz", (HealthEndpoints h) => h.Live());
         app.MapGet("/readyz", (HealthEndpoints h) => h.Ready());
+        app.MapFallback((HttpContext c) => NotFoundPage.Render(c));
     }
 }
