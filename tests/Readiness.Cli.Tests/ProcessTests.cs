@@ -11,8 +11,13 @@ public sealed class ProcessTests
     public static (int Exit, string Out, string Error) Run(string directory, params string[] args) => RunProgram(Program, directory, args);
 
     /// <summary>Runs a readiness program (this build's, or an installed one) without colour, bounded to 60 seconds.</summary>
-    public static (int Exit, string Out, string Error) RunProgram(string program, string directory, params string[] args)
+    public static (int Exit, string Out, string Error) RunProgram(string program, string directory, params string[] args) =>
+        RunProgram(program, directory, new Dictionary<string, string?>(), args);
+
+    /// <summary>As above, with <paramref name="environment"/> set on top of this process's (a null value removes one).</summary>
+    public static (int Exit, string Out, string Error) RunProgram(string program, string directory, IReadOnlyDictionary<string, string?> environment, params string[] args)
     {
+        ArgumentNullException.ThrowIfNull(environment);
         var info = new ProcessStartInfo(program) { WorkingDirectory = directory, RedirectStandardOutput = true, RedirectStandardError = true };
         foreach (var a in args)
         {
@@ -20,6 +25,18 @@ public sealed class ProcessTests
         }
 
         info.Environment["NO_COLOR"] = "1";
+        foreach (var (name, value) in environment)
+        {
+            if (value is null)
+            {
+                info.Environment.Remove(name);
+            }
+            else
+            {
+                info.Environment[name] = value;
+            }
+        }
+
         using var process = Process.Start(info)!;
         var output = process.StandardOutput.ReadToEndAsync();
         var error = process.StandardError.ReadToEndAsync();

@@ -55,6 +55,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
             return ExitCodes.Usage;
         }
         await WriteReportAsync(report, parse.GetValue(options.Format), parse.GetValue(options.Output), cancellationToken).ConfigureAwait(false);
+        await new WorkflowIntegration(console).WriteAsync(report, parse.GetValue(options.Output) is null, cancellationToken).ConfigureAwait(false);
         return FailPolicy.ExitCode(report, parse.GetValue(options.FailOn) ?? "block");
     }
 
