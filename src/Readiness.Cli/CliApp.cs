@@ -32,6 +32,16 @@ public sealed class CliApp(CliConsole console, TimeProvider time)
             return ExitCodes.Usage;
         }
 
+        if (OptionValueGuard.Problems(parse) is { Count: > 0 } swallowed)
+        {
+            foreach (var problem in swallowed)
+            {
+                await console.Error.WriteLineAsync($"readiness: {problem}").ConfigureAwait(false);
+            }
+
+            return ExitCodes.Usage;
+        }
+
         try
         {
             return await parse.InvokeAsync(new InvocationConfiguration { Output = console.Out, Error = console.Error, EnableDefaultExceptionHandler = false }, cancellationToken).ConfigureAwait(false);

@@ -3,7 +3,7 @@ namespace Readiness.Registries;
 /// <summary>How the registry adapters behave: time bound, on-disk cache, and where the user's NuGet configuration is.</summary>
 public sealed record RegistryOptions
 {
-    public static readonly TimeSpan DefaultTimeout = TimeSpan.FromSeconds(10);
+    public static readonly TimeSpan DefaultTimeout = Core.Engine.RegistryPhase.DefaultTimeout;
     public static readonly TimeSpan DefaultCacheTimeToLive = TimeSpan.FromMinutes(10);
 
     /// <summary>Longest time one HTTP request may take (the registry phase bounds the whole lookup separately).</summary>

@@ -1,3 +1,5 @@
+using Readiness.Core.Engine;
+
 namespace Readiness.Rendering;
 
 /// <summary>The report formats by name, as <c>--format</c> takes them (cli.md).</summary>
@@ -7,9 +9,15 @@ public sealed class RendererCatalog
 
     /// <param name="color">Colour for the text format (see <see cref="ConsoleColorPolicy"/>).</param>
     /// <param name="verbose">The text format lists every pass.</param>
-    public RendererCatalog(bool color = false, bool verbose = false)
+    /// <param name="checks">The check descriptors machine formats describe their rules with.</param>
+    /// <param name="pages">Where the check pages are published (SARIF help links).</param>
+    public RendererCatalog(bool color = false, bool verbose = false, CheckCatalog? checks = null, CheckPages? pages = null)
     {
-        renderers = [new TextRenderer(color, verbose), new MarkdownRenderer(), new HtmlRenderer(), new JsonRenderer()];
+        renderers =
+        [
+            new TextRenderer(color, verbose), new MarkdownRenderer(), new HtmlRenderer(), new JsonRenderer(),
+            new SarifRenderer(checks, pages), new JunitRenderer(),
+        ];
     }
 
     /// <summary>The format names, in the order <c>--help</c> lists them.</summary>

@@ -210,6 +210,52 @@ public sealed class HookTests : IDisposable
     }
 
     [Fact]
+    public async Task Uninstall_InOneHooksFolder_KeepsTheCommandThatAHookInAnotherFolderNeeds()
+    {
+        // Installed twice: in the git directory's hooks/ and, after core.hooksPath is set, in that folder too.
+        await InstallAsync();
+        var shared = scratch.Combine("team-hooks");
+        Directory.CreateDirectory(shared);
+        repo.Git("config", "core.hooksPath", shared);
+        await InstallAsync();
+
+        var (exit, output, _) = await CliHarness.RunAsync(repo.Path, "hook", "uninstall");
+        Assert.Equal(0, exit);
+        Assert.Contains("kept the recorded readiness command", output, StringComparison.Ordinal);
+
+        // Back to the git directory's hooks/: that hook still finds its command (git config --get exits 0) and works.
+        repo.Git("config", "--unset", "core.hooksPath");
+        Assert.Equal(ProcessTests.Program, repo.Git("config", "--get", "readiness.command").Trim());
+        var (status, statusOut, _) = await CliHarness.RunAsync(repo.Path, "hook", "status");
+        Assert.True(status == 0, statusOut);
+        MakeNotReadyTag();
+        Assert.True(Push("origin", "main").Succeeded);
+        Assert.False(Push("origin", "v1.3.0").Succeeded);
+
+        // The last one removed takes the recorded command with it.
+        var (lastExit, lastOut, _) = await CliHarness.RunAsync(repo.Path, "hook", "uninstall");
+        Assert.Equal(0, lastExit);
+        Assert.DoesNotContain("kept the recorded", lastOut, StringComparison.Ordinal);
+        Assert.False(GitCli.TryRun(repo.Path, ["config", "--get", "readiness.command"], new Dictionary<string, string>()).Succeeded);
+    }
+
+    [Fact]
+    public async Task Status_NamesAHookWhoseCommandCannotBeFound_AsUnhealthy()
+    {
+        await InstallAsync(scratch.Combine("moved-away", "readiness"));
+        var (exit, output, _) = await CliHarness.RunAsync(repo.Path, "hook", "status");
+        Assert.Equal(1, exit);
+        Assert.Contains("NOT FOUND", output, StringComparison.Ordinal);
+
+        // No recorded command and no `readiness` on PATH: the shell hook would stop every release push.
+        repo.Git("config", "--unset", "readiness.command");
+        var env = new Dictionary<string, string> { ["PATH"] = scratch.Combine("empty-path") };
+        var (pathExit, pathOut, _) = await CliHarness.RunWithInputAsync(repo.Path, string.Empty, env, "hook", "status");
+        Assert.Equal(1, pathExit);
+        Assert.Contains("not on PATH", pathOut, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void PrePushInput_FollowsGitsDocumentedFormat()
     {
         // Reference: githooks(5) pre-push — "<local ref> SP <local oid> SP <remote ref> SP <remote oid> LF";

@@ -29,7 +29,7 @@ public sealed class OtherCommandsTests
         Assert.Equal(0, exit);
         Assert.Contains("https://keepachangelog.com/en/1.1.0/", output, StringComparison.Ordinal);
         Assert.Contains("How to fix", output, StringComparison.Ordinal);
-        Assert.Contains("Settings (in .readiness.yml, or under the check's with: in a checklist):\n  changelog\n", output.ReplaceLineEndings("\n"), StringComparison.Ordinal);
+        Assert.Contains("Settings (in .readiness.yml, or under the check's settings: in a checklist):\n  changelog\n", output.ReplaceLineEndings("\n"), StringComparison.Ordinal);
 
         var (_, registry, _) = await CliHarness.RunAsync(Path.GetTempPath(), "explain", "registry.id-owned");
         Assert.Contains("known-ids, owners, registry-required", registry, StringComparison.Ordinal);
@@ -41,6 +41,20 @@ public sealed class OtherCommandsTests
         var (exit, _, error) = await CliHarness.RunAsync(Path.GetTempPath(), "explain", "changelog.nope");
         Assert.Equal(2, exit);
         Assert.Contains("version.well-formed", error, StringComparison.Ordinal);
+
+        var (_, _, typo) = await CliHarness.RunAsync(Path.GetTempPath(), "explain", "changelog.has-entyr");
+        Assert.Contains("did you mean 'changelog.has-entry'?", typo, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task Explain_Page_PrintsTheCheckPageCarriedInsideTheProgram()
+    {
+        // The page comes from the program's resources, not from a source checkout: compare with the file it was built from.
+        var (exit, output, _) = await CliHarness.RunAsync(Path.GetTempPath(), "explain", "license.declared", "--page");
+        Assert.Equal(0, exit);
+        var source = File.ReadAllText(Path.Combine(Readiness.Testing.RepositoryRoot.Path, "checklists", "checks", "license.declared.md"));
+        Assert.Equal(source.ReplaceLineEndings("\n"), output.ReplaceLineEndings("\n"));
+        Assert.All(Core.Engine.CheckCatalog.BuiltIn().Checks.Select(c => c.Descriptor.Id), id => Assert.NotNull(Commands.ExplainCommand.CheckPage(id)));
     }
 
     [Fact]

@@ -5,8 +5,8 @@ public sealed class RendererCatalogTests
     [Fact]
     public void Formats_AreTheOnesTheCommandLineOffers()
     {
-        // cli.md: --format text|markdown|html|json.
-        Assert.Equal(["text", "markdown", "html", "json"], new RendererCatalog().Formats);
+        // cli.md: --format text|markdown|html|json, and the CI formats sarif and junit.
+        Assert.Equal(["text", "markdown", "html", "json", "sarif", "junit"], new RendererCatalog().Formats);
     }
 
     [Theory]
@@ -15,6 +15,8 @@ public sealed class RendererCatalogTests
     [InlineData("html", typeof(HtmlRenderer))]
     [InlineData("json", typeof(JsonRenderer))]
     [InlineData("JSON", typeof(JsonRenderer))]
+    [InlineData("sarif", typeof(SarifRenderer))]
+    [InlineData("junit", typeof(JunitRenderer))]
     public void Find_ReturnsTheRendererOfTheFormat(string format, Type type)
     {
         var renderer = new RendererCatalog().Find(format);
@@ -24,8 +26,7 @@ public sealed class RendererCatalogTests
     }
 
     [Theory]
-    [InlineData("sarif")]
-    [InlineData("junit")]
+    [InlineData("junit-xml")]
     [InlineData("")]
     [InlineData(null)]
     public void Find_UnknownFormat_ReturnsNull(string? format) =>

@@ -31,8 +31,29 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
             return ExitCodes.Usage;
         }
 
+        if (console.Env(DocsUrlVariable) is { } docs && !CheckPages.IsValidBase(docs))
+        {
+            await console.Error.WriteLineAsync($"readiness: {DocsUrlVariable} must be an absolute http(s) URL, not '{docs}'").ConfigureAwait(false);
+            return ExitCodes.Usage;
+        }
+
+        if (parse.GetValue(options.Registry) is { } registry && !registry.Contains("://", StringComparison.Ordinal) && !Directory.Exists(console.FullPath(registry)))
+        {
+            await console.Error.WriteLineAsync($"readiness: --registry {registry}: no such folder ({console.FullPath(registry)}); give a local folder feed or a service index URL").ConfigureAwait(false);
+            return ExitCodes.Usage;
+        }
+
         var request = await BuildRequestAsync(parse, console.FullPath(path ?? "."), cancellationToken).ConfigureAwait(false);
         var report = await composition.Runner.RunAsync(request, Registries(parse), cancellationToken).ConfigureAwait(false);
+        if (UnknownConfirmations(report, request.Confirmed ?? []) is { Count: > 0 } unknown)
+        {
+            foreach (var problem in unknown)
+            {
+                await console.Error.WriteLineAsync($"readiness: {problem}").ConfigureAwait(false);
+            }
+
+            return ExitCodes.Usage;
+        }
         await WriteReportAsync(report, parse.GetValue(options.Format), parse.GetValue(options.Output), cancellationToken).ConfigureAwait(false);
         return FailPolicy.ExitCode(report, parse.GetValue(options.FailOn) ?? "block");
     }
@@ -51,7 +72,22 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
             parse.GetValue(options.Version),
             parse.GetValue(options.Confirm) ?? [],
             null,
-            TimeSpan.FromSeconds(Math.Clamp(parse.GetValue(options.RegistryTimeout), 1, 300)));
+            ExplicitRegistryTimeout(parse));
+    }
+
+    /// <summary>One message per <c>--confirm</c> that names no manual item of the checklist applied.</summary>
+    public static IReadOnlyList<string> UnknownConfirmations(Report report, IReadOnlyList<string> confirmed)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        ArgumentNullException.ThrowIfNull(confirmed);
+        const string prefix = "manual.";
+        var items = report.Results.Where(r => r.Check.StartsWith(prefix, StringComparison.Ordinal)).Select(r => r.Check[prefix.Length..]).ToList();
+        return confirmed
+            .Where(id => !items.Contains(id, StringComparer.Ordinal))
+            .Select(id => $"--confirm {id}: checklist {report.Subject.Checklist} has no manual item '{id}'"
+                + (Core.Configuration.NameSuggestion.Nearest(id, items) is { } near ? $"; did you mean '{near}'?"
+                    : items.Count == 0 ? " (it has no manual items)" : $" (its items: {string.Join(", ", items)})"))
+            .ToList();
     }
 
     public RegistrySelector? Registries(ParseResult parse)
@@ -64,18 +100,41 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
 
         return RegistriesFor(
             parse.GetValue(options.Registry),
-            TimeSpan.FromSeconds(Math.Clamp(parse.GetValue(options.RegistryTimeout), 1, 300)),
+            ExplicitRegistryTimeout(parse),
             parse.GetValue(options.NoCache));
     }
 
+    /// <summary>
+    /// <c>--registry-timeout</c>, else <c>READINESS_REGISTRY_TIMEOUT</c> (seconds); null lets the repository's
+    /// <c>registry-timeout</c> or the default decide (<see cref="RegistryPhase.Resolve"/>).
+    /// </summary>
+    public TimeSpan? ExplicitRegistryTimeout(ParseResult parse)
+    {
+        ArgumentNullException.ThrowIfNull(parse);
+        if (parse.GetValue(options.RegistryTimeout) is { } seconds)
+        {
+            return seconds > 0 ? TimeSpan.FromSeconds(seconds) : throw new Core.Configuration.ConfigurationException(new("(command line)", 1, 1), "--registry-timeout must be a positive number of seconds");
+        }
+
+        var env = console.Env("READINESS_REGISTRY_TIMEOUT");
+        if (env is null)
+        {
+            return null;
+        }
+
+        return double.TryParse(env, System.Globalization.NumberStyles.AllowDecimalPoint, System.Globalization.CultureInfo.InvariantCulture, out var fromEnv) && fromEnv > 0
+            ? TimeSpan.FromSeconds(fromEnv)
+            : throw new Core.Configuration.ConfigurationException(new("READINESS_REGISTRY_TIMEOUT", 1, 1), $"must be a positive number of seconds, not '{env}'");
+    }
+
     /// <summary>The registry for a run: <paramref name="explicitSource"/>, else <c>publish-to</c>, else the public feed.</summary>
-    public RegistrySelector RegistriesFor(string? explicitSource, TimeSpan timeout, bool noCache)
+    public RegistrySelector RegistriesFor(string? explicitSource, TimeSpan? timeout, bool noCache)
     {
         return config =>
         {
             var source = RegistryFactory.ChooseSource(explicitSource, config);
             var local = source.Contains("://", StringComparison.Ordinal) ? source : console.FullPath(source);
-            var registryOptions = new RegistryOptions { Timeout = timeout, NoCache = noCache, AskOwners = config.GetList("owners").Count > 0 };
+            var registryOptions = new RegistryOptions { Timeout = RegistryPhase.Resolve(timeout, config), NoCache = noCache, AskOwners = config.GetList("owners").Count > 0 };
             return RegistryFactory.Create(local, registryOptions);
         };
     }
@@ -85,7 +144,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         ArgumentNullException.ThrowIfNull(report);
         var chosen = format ?? (output is not null ? FormatFromExtension(output) : console.IsTerminal ? "text" : "markdown");
         var color = output is null && ConsoleColorPolicy.ShouldUseColor(console.IsTerminal, new Dictionary<string, string>(console.Environment));
-        var renderer = new RendererCatalog(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
+        var renderer = Renderers(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
         if (output is null)
         {
             renderer.Render(report, console.Out);
@@ -103,6 +162,12 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         _ = cancellationToken;
     }
 
+    /// <summary>The renderers, with the check descriptors and the check pages' address (<c>READINESS_DOCS_URL</c>).</summary>
+    public RendererCatalog Renderers(bool color = false) =>
+        new(color, checks: composition.Catalog, pages: new CheckPages(console.Env(DocsUrlVariable)));
+
+    public const string DocsUrlVariable = "READINESS_DOCS_URL";
+
     public static string Summary(Report report)
     {
         ArgumentNullException.ThrowIfNull(report);
@@ -114,6 +179,8 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
     private static string FormatFromExtension(string output) => Path.GetExtension(output).ToLowerInvariant() switch
     {
         ".json" => "json",
+        ".sarif" => "sarif",
+        ".xml" => "junit",
         ".html" or ".htm" => "html",
         ".md" or ".markdown" => "markdown",
         _ => "text",

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using Readiness.Rendering;
 
 namespace Readiness.Cli.Commands;
 
@@ -17,7 +18,7 @@ public sealed class CheckOptions
 
     public Option<string?> Checklist { get; } = new("--checklist") { Description = "Checklist NAME, PATH or URL (default: checklist in .readiness.yml, else library)" };
 
-    public Option<string?> Format { get; } = new("--format") { Description = "text, markdown, html or json (default: text on a terminal, markdown otherwise)" };
+    public Option<string?> Format { get; } = new("--format") { Description = "text, markdown, html, json, sarif or junit (default: text on a terminal, markdown otherwise)" };
 
     public Option<string?> Output { get; } = new("--output") { Description = "Write the report to FILE; a short summary still goes to the terminal" };
 
@@ -25,7 +26,7 @@ public sealed class CheckOptions
 
     public Option<string?> Registry { get; } = new("--registry") { Description = "NuGet feed (service index URL or local folder) to check against" };
 
-    public Option<int> RegistryTimeout { get; } = new("--registry-timeout") { Description = "Seconds allowed for the whole registry phase", DefaultValueFactory = _ => 10 };
+    public Option<double?> RegistryTimeout { get; } = new("--registry-timeout") { Description = "Seconds allowed for the whole registry phase, 1 to 60 (default: READINESS_REGISTRY_TIMEOUT, else registry-timeout in .readiness.yml, else 10)" };
 
     public Option<bool> NoCache { get; } = new("--no-cache") { Description = "Do not use the on-disk registry cache" };
 
@@ -47,6 +48,6 @@ public sealed class CheckOptions
         }
 
         FailOn.AcceptOnlyFromAmong("block", "warn", "never");
-        Format.AcceptOnlyFromAmong("text", "markdown", "html", "json");
+        Format.AcceptOnlyFromAmong([.. new RendererCatalog().Formats]);
     }
 }

@@ -87,7 +87,7 @@ public sealed class ChecklistCommand(Composition composition, CliConsole console
             var implemented = composition.Catalog.Find(check.Id) is null ? "  # not implemented in this version" : string.Empty;
             var with = check.With.Count == 0
                 ? string.Empty
-                : ", with: { " + string.Join(", ", check.With.Select(w => $"{w.Key}: {Describe(w.Value)}")) + " }";
+                : ", settings: { " + string.Join(", ", check.With.Select(w => $"{w.Key}: {Describe(w.Value)}")) + " }";
             console.Out.WriteLine($"  {check.Id}: {{ severity: {check.Severity.Name()}{with} }}{implemented}");
         }
 

@@ -18,7 +18,7 @@ public sealed class HookCommand(Composition composition, CliConsole console, Che
         status.Arguments.Add(statusPath);
         status.SetAction(parse =>
         {
-            var (healthy, lines) = new HookInstaller(console.FullPath(parse.GetValue(statusPath) ?? ".")).Status(HookSource());
+            var (healthy, lines) = new HookInstaller(console.FullPath(parse.GetValue(statusPath) ?? "."), console.Env("PATH")).Status(HookSource());
             foreach (var line in lines)
             {
                 console.Out.WriteLine(line);

@@ -1,7 +1,9 @@
 namespace Readiness.Cli.Hooks;
 
 /// <summary>Installs, removes and describes the pre-push hook of one repository.</summary>
-public sealed class HookInstaller(string repositoryPath)
+/// <param name="repositoryPath">Any folder of the repository.</param>
+/// <param name="searchPath">The PATH the hook will search (default: this process's).</param>
+public sealed class HookInstaller(string repositoryPath, string? searchPath = null)
 {
     public const string HookName = "pre-push";
     public const string ChainedName = "pre-push.readiness-chained";
@@ -68,8 +70,47 @@ public sealed class HookInstaller(string repositoryPath)
             messages.Add($"restored the earlier hook to {target}");
         }
 
-        GitProcess.Run(repositoryPath, "config", "--local", "--unset", CommandSetting);
+        // The recorded command is shared by every hooks folder of this repository: keep it while a Readiness hook
+        // remains in another one (the git directory's hooks/ beside core.hooksPath, or the other way round).
+        var remaining = HookFolders().Where(f => !SameFolder(f, hooks) && HasOurHook(f)).ToList();
+        if (remaining.Count == 0)
+        {
+            GitProcess.Run(repositoryPath, "config", "--local", "--unset", CommandSetting);
+        }
+        else
+        {
+            messages.Add($"kept the recorded readiness command: a Readiness hook remains in {string.Join(", ", remaining)}");
+        }
+
         return string.Join(Environment.NewLine, messages);
+    }
+
+    /// <summary>Every hooks folder git may use for this repository: the git directory's <c>hooks/</c> and <c>core.hooksPath</c>.</summary>
+    public IReadOnlyList<string> HookFolders()
+    {
+        var folders = new List<string> { HooksDirectory() };
+        var (code, commonDir, _) = GitProcess.Run(repositoryPath, "rev-parse", "--git-common-dir");
+        if (code == 0 && commonDir.Length > 0)
+        {
+            folders.Add(Path.Combine(Path.GetFullPath(commonDir, repositoryPath), "hooks"));
+        }
+
+        var (pathCode, hooksPath, _) = GitProcess.Run(repositoryPath, "config", "--get", "core.hooksPath");
+        if (pathCode == 0 && hooksPath.Length > 0)
+        {
+            folders.Add(Path.GetFullPath(hooksPath, repositoryPath));
+        }
+
+        return folders.DistinctBy(f => Path.TrimEndingDirectorySeparator(f), StringComparer.Ordinal).ToList();
+    }
+
+    private static bool SameFolder(string a, string b) =>
+        string.Equals(Path.TrimEndingDirectorySeparator(a), Path.TrimEndingDirectorySeparator(b), StringComparison.Ordinal);
+
+    private static bool HasOurHook(string folder)
+    {
+        var hook = Path.Combine(folder, HookName);
+        return File.Exists(hook) && IsOurs(hook);
     }
 
     /// <summary>
@@ -107,19 +148,32 @@ public sealed class HookInstaller(string repositoryPath)
             lines.Add($"chained: {ChainedName} runs first");
         }
 
+        // The hook runs the recorded command, else `readiness` from PATH (hooks/pre-push): either must exist.
         var (code, command, _) = GitProcess.Run(repositoryPath, "config", "--get", CommandSetting);
-        var found = code == 0 && (File.Exists(command) || CommandOnPath(command) is not null);
-        lines.Add(code == 0 ? $"readiness command: {command}{(found ? string.Empty : " (NOT FOUND)")}" : "readiness command: not recorded (PATH is searched)");
-        healthy &= code != 0 || found;
+        if (code == 0)
+        {
+            var found = File.Exists(command) || CommandOnPath(command, searchPath) is not null;
+            lines.Add($"readiness command: {command}{(found ? string.Empty : " (NOT FOUND: the hook will stop every release push)")}");
+            healthy &= found;
+        }
+        else
+        {
+            var onPath = CommandOnPath("readiness", searchPath);
+            lines.Add(onPath is null
+                ? "readiness command: not recorded and 'readiness' is not on PATH (NOT FOUND: the hook will stop every release push; run 'readiness hook install' again)"
+                : $"readiness command: not recorded; PATH gives {onPath}");
+            healthy &= onPath is not null;
+        }
+
         return (healthy, lines);
     }
 
     public static bool IsOurs(string path) =>
         File.ReadLines(path).Take(5).Any(l => l.Contains(Marker, StringComparison.Ordinal));
 
-    public static string? CommandOnPath(string name)
+    public static string? CommandOnPath(string name, string? searchPath = null)
     {
-        foreach (var folder in (Environment.GetEnvironmentVariable("PATH") ?? string.Empty).Split(Path.PathSeparator, StringSplitOptions.RemoveEmptyEntries))
+        foreach (var folder in (searchPath ?? Environment.GetEnvironmentVariable("PATH") ?? string.Empty).Split(Path.PathSeparator, StringSplitOptions.RemoveEmptyEntries))
         {
             var candidate = Path.Combine(folder, name);
             if (File.Exists(candidate))

@@ -34,30 +34,7 @@ public sealed record Waivers(IReadOnlyDictionary<string, string> Reasons)
         ArgumentNullException.ThrowIfNull(knownIds);
         return Reasons.Keys
             .Where(id => !knownIds.Contains(id))
-            .Select(id => $"READINESS_WAIVE names '{id}', which is not a check{(Nearest(id, knownIds) is { } near ? $"; did you mean '{near}'?" : " (readiness explain lists them)")}")
+            .Select(id => $"READINESS_WAIVE names '{id}', which is not a check{(Core.Configuration.NameSuggestion.Nearest(id, knownIds) is { } near ? $"; did you mean '{near}'?" : " (readiness explain lists them)")}")
             .ToList();
-    }
-
-    /// <summary>The known id at the smallest edit distance, when it is close enough to be a typo (at most 3 edits).</summary>
-    private static string? Nearest(string id, IEnumerable<string> knownIds) =>
-        knownIds.Select(k => (Id: k, Distance: EditDistance(id, k))).Where(p => p.Distance <= 3).OrderBy(p => p.Distance).ThenBy(p => p.Id, StringComparer.Ordinal).Select(p => p.Id).FirstOrDefault();
-
-    /// <summary>Levenshtein distance (insertions, deletions, substitutions).</summary>
-    private static int EditDistance(string a, string b)
-    {
-        var previous = Enumerable.Range(0, b.Length + 1).ToArray();
-        for (var i = 1; i <= a.Length; i++)
-        {
-            var current = new int[b.Length + 1];
-            current[0] = i;
-            for (var j = 1; j <= b.Length; j++)
-            {
-                current[j] = Math.Min(Math.Min(current[j - 1] + 1, previous[j] + 1), previous[j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1));
-            }
-
-            previous = current;
-        }
-
-        return previous[b.Length];
     }
 }

@@ -7,7 +7,7 @@ namespace Readiness.Core.Checklists;
 public sealed class ChecklistParser(IReadOnlySet<string> knownCheckIds)
 {
     private static readonly string[] TopKeys = ["name", "description", "extends", "checks", "manual"];
-    private static readonly string[] CheckKeys = ["severity", "with"];
+    private static readonly string[] CheckKeys = ["severity", "settings"];
     private static readonly string[] ManualKeys = ["id", "text", "severity"];
 
     public ChecklistDefinition Parse(string file, string text)
@@ -35,7 +35,7 @@ public sealed class ChecklistParser(IReadOnlySet<string> knownCheckIds)
         {
             if (!knownCheckIds.Contains(entry.Key))
             {
-                throw new ConfigurationException(entry.KeyMark, $"unknown check id '{entry.Key}' (see 'readiness explain' or checklists/README.md)");
+                throw new ConfigurationException(entry.KeyMark, $"unknown check id '{entry.Key}'{NameSuggestion.Hint(entry.Key, knownCheckIds)} (see 'readiness explain' or checklists/README.md)");
             }
 
             result.Add(new(entry.Key, ParseSettings(entry.Key, entry.Value)));
@@ -52,6 +52,11 @@ public sealed class ChecklistParser(IReadOnlySet<string> knownCheckIds)
         }
 
         var map = node.AsMap($"the settings of {id}");
+        if (map.Find("with") is { } old)
+        {
+            throw new ConfigurationException(old.KeyMark, $"the settings of {id} go under 'settings:' (the key 'with:' was renamed)");
+        }
+
         map.RejectUnknownKeys(CheckKeys, $"the settings of {id}");
         Severity? severity = null;
         var off = false;
@@ -73,9 +78,9 @@ public sealed class ChecklistParser(IReadOnlySet<string> knownCheckIds)
         }
 
         var with = new Dictionary<string, ConfigNode>(StringComparer.Ordinal);
-        if (map.Find("with") is { } w)
+        if (map.Find("settings") is { } w)
         {
-            foreach (var p in w.Value.AsMap("with").Entries)
+            foreach (var p in w.Value.AsMap("settings").Entries)
             {
                 with[p.Key] = p.Value;
             }

@@ -20,6 +20,6 @@ public sealed record CheckDescriptor(
 {
     public string Group => Id[..Id.IndexOf('.', StringComparison.Ordinal)];
 
-    /// <summary>The settings the check reads: keys of <c>.readiness.yml</c> or of the checklist's <c>with:</c>.</summary>
+    /// <summary>The settings the check reads: keys of <c>.readiness.yml</c> or of the checklist's <c>settings:</c>.</summary>
     public IReadOnlyList<string> Settings { get; init; } = [];
 }

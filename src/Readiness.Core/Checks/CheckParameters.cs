@@ -2,7 +2,7 @@ using Readiness.Core.Configuration;
 
 namespace Readiness.Core.Checks;
 
-/// <summary>A check's parameters: the checklist's <c>with:</c> values, falling back to the repository configuration.</summary>
+/// <summary>A check's parameters: the checklist's <c>settings:</c> values, falling back to the repository configuration.</summary>
 public sealed class CheckParameters(IReadOnlyDictionary<string, ConfigNode> with, RepositoryConfig config)
 {
     public static CheckParameters None { get; } = new(new Dictionary<string, ConfigNode>(), RepositoryConfig.Empty);

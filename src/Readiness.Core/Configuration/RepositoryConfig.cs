@@ -4,7 +4,7 @@ namespace Readiness.Core.Configuration;
 
 /// <summary>
 /// The inspected repository's <c>.readiness.yml</c> (all optional). Top-level values double as check parameters:
-/// a check asks <see cref="Checks.CheckParameters"/> and gets its checklist's <c>with:</c> value, else this file's.
+/// a check asks <see cref="Checks.CheckParameters"/> and gets its checklist's <c>settings:</c> value, else this file's.
 /// </summary>
 public sealed record RepositoryConfig(
     string? Checklist,

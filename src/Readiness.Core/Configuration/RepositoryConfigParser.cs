@@ -17,6 +17,7 @@ public sealed class RepositoryConfigParser(ChecklistParser checklists)
         "known-ids",
         "maintenance-lines",
         "owners",
+        "projects-required",
         "publish-to",
         "registry-required",
         "registry-timeout",

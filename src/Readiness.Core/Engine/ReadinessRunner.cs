@@ -41,10 +41,20 @@ public sealed class ReadinessRunner(
         var config = request.Config ?? ReadConfig(snapshot.Files);
         var resolver = Resolver;
         var definition = request.Checklist
-            ?? resolver.Load(request.ChecklistName ?? config.Checklist ?? DefaultChecklist,
-                config.Checklist is not null && request.ChecklistName is null ? config.Values["checklist"].Mark : null);
+            ?? (request.ChecklistName is null && config.Checklist is { } own && RepositoryChecklist.IsPath(own)
+                ? RepositoryChecklist.Load(snapshot.Files, own, config.Values["checklist"].Mark, Parser)
+                : resolver.Load(request.ChecklistName ?? config.Checklist ?? DefaultChecklist,
+                    config.Checklist is not null && request.ChecklistName is null ? config.Values["checklist"].Mark : null));
         var checklist = resolver.Resolve(definition, config);
         var model = projectReader.Read(snapshot.Files);
+        var projectsRequired = !config.Values.TryGetValue(BuildInventory.ProjectsRequiredKey, out var required)
+            || required.AsBool(BuildInventory.ProjectsRequiredKey);
+        if (model.Projects.Count == 0 && projectsRequired)
+        {
+            // No build the tool understands: never a verdict without grounds (exit 3, "could not inspect").
+            throw new RepositoryInspectionException(BuildInventory.Describe(snapshot.Files, model));
+        }
+
         var now = time.GetUtcNow();
         var release = ReleaseFactsBuilder.Build(snapshot, model, config, request.Version, now);
 
@@ -59,7 +69,7 @@ public sealed class ReadinessRunner(
                     : await RegistryPhase.GatherAsync(
                         registry,
                         RegistryIds(model),
-                        RegistryPhase.TimeoutFrom(config, request.RegistryTimeout ?? RegistryPhase.DefaultTimeout),
+                        RegistryPhase.Resolve(request.RegistryTimeout, config),
                         cancellationToken).ConfigureAwait(false);
             }
             finally
@@ -72,6 +82,12 @@ public sealed class ReadinessRunner(
         notes.AddRange(checklist.Checks.Where(c => engine.Catalog.Find(c.Id) is null)
             .Select(c => $"{c.Id} is in the checklist but this version of the tool does not implement it yet; it did not run."));
         notes.AddRange(model.Problems.Select(p => p.Line is { } line ? $"{p.Path}:{line}: {p.Message}" : $"{p.Path}: {p.Message}"));
+        if (model.Projects.Count == 0)
+        {
+            notes.Add($"No .NET project was read; {BuildInventory.ProjectsRequiredKey}: false in {RepositoryConfig.FileName} allows that.");
+        }
+
+        notes.Add($"Release tags: {release.TagPatternSource}.");
         notes.Add($"Version {release.Version ?? "(unknown)"} taken from {release.VersionSource}.");
         var input = new EngineInput(
             snapshot,

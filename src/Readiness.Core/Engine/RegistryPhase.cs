@@ -38,9 +38,21 @@ public static class RegistryPhase
             throw new ConfigurationException(node.Mark, "registry-timeout must be a number of seconds, such as 10 or 2.5");
         }
 
-        var timeout = TimeSpan.FromSeconds(seconds);
-        return timeout < MinTimeout ? MinTimeout : timeout > MaxTimeout ? MaxTimeout : timeout;
+        return Clamp(TimeSpan.FromSeconds(seconds));
     }
+
+    /// <summary>
+    /// The one rule for the bound: an explicit value (command line, else environment) wins over the repository's
+    /// <c>registry-timeout</c>, which wins over <see cref="DefaultTimeout"/>; every source is kept within
+    /// [<see cref="MinTimeout"/>, <see cref="MaxTimeout"/>].
+    /// </summary>
+    public static TimeSpan Resolve(TimeSpan? explicitTimeout, RepositoryConfig config)
+    {
+        ArgumentNullException.ThrowIfNull(config);
+        return explicitTimeout is { } given ? Clamp(given) : TimeoutFrom(config, DefaultTimeout);
+    }
+
+    public static TimeSpan Clamp(TimeSpan timeout) => timeout < MinTimeout ? MinTimeout : timeout > MaxTimeout ? MaxTimeout : timeout;
 
     public static async Task<RegistryFacts> GatherAsync(
         IPackageRegistry registry, IEnumerable<string> ids, TimeSpan timeout, CancellationToken cancellationToken)

@@ -12,7 +12,8 @@ namespace Readiness.Core.Engine;
 /// <param name="Confirmed">Manual items a person confirmed.</param>
 /// <param name="Config">The repository configuration to apply instead of the one at the inspected commit
 /// (the service passes the base branch's, so a pull request cannot loosen its own rules).</param>
-/// <param name="RegistryTimeout">The bound on the whole registry phase (default 10 s).</param>
+/// <param name="RegistryTimeout">An explicit bound on the whole registry phase (command line or environment); null: the
+/// repository's <c>registry-timeout</c>, else 10 s (<see cref="RegistryPhase.Resolve"/>).</param>
 public sealed record RunRequest(
     SnapshotRequest Snapshot,
     string? ChecklistName = null,

@@ -9,7 +9,7 @@ namespace Readiness.Service.Worker;
 /// </summary>
 public sealed class JobWorker(
     ServiceSettings settings,
-    JobStore jobs,
+    IJobStore jobs,
     JobSignal signal,
     PullRequestJobProcessor processor,
     TimeProvider time,
@@ -33,6 +33,14 @@ public sealed class JobWorker(
                 if (job is null)
                 {
                     await signal.WaitAsync(IdleWait(), stoppingToken).ConfigureAwait(false);
+                    continue;
+                }
+
+                if (job.State == JobState.Failed)
+                {
+                    // Its last attempt's process died holding it: the store gave up at claim time.
+                    logger.LogError("Job {Job} failed after {Attempts} attempts: {Error}", job.Id, job.Attempts, job.Error);
+                    await ReportFailureAsync(job, job.Error ?? JobState.Failed).ConfigureAwait(false);
                     continue;
                 }
 
@@ -119,6 +127,11 @@ public sealed class JobWorker(
 
         logger.LogError("Job {Job} failed after {Attempts} attempts: {Error}", job.Id, job.Attempts, message);
         await jobs.FinishAsync(job.Id, owner, JobState.Failed, null, message, CancellationToken.None).ConfigureAwait(false);
+        await ReportFailureAsync(job, message).ConfigureAwait(false);
+    }
+
+    private async Task ReportFailureAsync(Job job, string message)
+    {
         try
         {
             await processor.ReportFailureAsync(job, message, CancellationToken.None).ConfigureAwait(false);

@@ -25,8 +25,8 @@ public sealed class PullRequestJobProcessor(
     ReportDocuments documents,
     IForgeCredentials credentials,
     IForge forge,
-    JobStore jobs,
-    RunStore runs,
+    IJobStore jobs,
+    IRunStore runs,
     SecretRedactor redactor,
     ILogger<PullRequestJobProcessor> logger)
 {

@@ -74,6 +74,15 @@ public sealed class ChecklistTests
         Assert.Equal(3, e.Mark.Line);
         Assert.Equal(3, e.Mark.Column);
         Assert.Contains("version.wellformed", e.Message, StringComparison.Ordinal);
+        Assert.Contains("did you mean 'version.well-formed'?", e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void OldSettingsKey_IsAnErrorThatNamesTheNewOne()
+    {
+        var e = Assert.Throws<ConfigurationException>(() => Parser.Parse("mine.yml", "name: mine\nchecks:\n  changelog.present:\n    with: { changelog: NEWS.md }\n"));
+        Assert.Equal(4, e.Mark.Line);
+        Assert.Contains("'settings:'", e.Message, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -142,7 +151,7 @@ public sealed class ChecklistTests
                 checks:
                   deps.host-compile-only:
                     severity: block
-                    with:
+                    settings:
                       host-packages: ["Lanternfly.Host.*"]
                 manual:
                   - id: soak

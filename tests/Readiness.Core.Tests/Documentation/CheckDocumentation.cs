@@ -24,11 +24,11 @@ internal static class CheckDocumentation
         b.Append("## How to fix a failure\n\n").Append(d.Fix).Append("\n\n");
         if (d.Settings.Count > 0)
         {
-            b.Append("## Settings\n\nRead from `.readiness.yml`, or from the check's `with:` in a checklist: ")
+            b.Append("## Settings\n\nRead from `.readiness.yml`, or from the check's `settings:` in a checklist: ")
                 .Append(string.Join(", ", d.Settings.Select(x => $"`{x}`"))).Append(".\n\n");
         }
 
-        b.Append("## See also\n\n`readiness explain ").Append(d.Id).Append("` prints this page's essentials.\n\n");
+        b.Append("## See also\n\n`readiness explain ").Append(d.Id).Append("` prints this page's essentials; `readiness explain ").Append(d.Id).Append(" --page` prints this page from the installed tool.\n\n");
         b.Append("<!-- Generated from the check's descriptor; edit the descriptor, then regenerate (DEVELOPERS.md). -->\n");
         return b.ToString();
     }

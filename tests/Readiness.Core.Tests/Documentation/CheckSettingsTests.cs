@@ -20,7 +20,7 @@ public sealed partial class CheckSettingsTests
         ("SignatureJudge.", "allowed-signers"),
     ];
 
-    /// <summary>Settings only a checklist's <c>with:</c> carries (not top-level keys of <c>.readiness.yml</c>).</summary>
+    /// <summary>Settings only a checklist's <c>settings:</c> carries (not top-level keys of <c>.readiness.yml</c>).</summary>
     private static readonly string[] WithOnly = ["allow-four-parts"];
 
     [Fact]

@@ -33,4 +33,18 @@ public class RegistryPhaseTimeoutTests
 
         Assert.Equal(2, error.Mark.Line);
     }
+
+    [Theory]
+    [InlineData(null, "", 10)]
+    [InlineData(null, "registry-timeout: 4\n", 4)]
+    [InlineData(2.0, "registry-timeout: 4\n", 2)]
+    [InlineData(300.0, "", 60)]
+    [InlineData(0.2, "", 1)]
+    public void CommandLine_BeatsTheRepositoryFile_WhichBeatsTheDefault_AllWithinOneBound(double? given, string yaml, double seconds)
+    {
+        var config = yaml.Length == 0 ? RepositoryConfig.Empty : RegistryCheckContexts.Config(yaml);
+        var explicitTimeout = given is { } g ? TimeSpan.FromSeconds(g) : (TimeSpan?)null;
+
+        Assert.Equal(TimeSpan.FromSeconds(seconds), RegistryPhase.Resolve(explicitTimeout, config));
+    }
 }

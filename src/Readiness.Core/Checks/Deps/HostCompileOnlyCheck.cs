@@ -51,7 +51,7 @@ public sealed class HostCompileOnlyCheck : ICheck
         }
 
         return hosts.IsEmpty && !anyRoslyn
-            ? [Finding.Skip("No host packages are configured (host-packages in the checklist's with: or in .readiness.yml) "
+            ? [Finding.Skip("No host packages are configured (host-packages in the checklist's settings: or in .readiness.yml) "
                 + "and no project is a Roslyn component.")]
             : [Finding.Skip(hosts.IsEmpty
                 ? "The Roslyn components reference no Microsoft.CodeAnalysis package."

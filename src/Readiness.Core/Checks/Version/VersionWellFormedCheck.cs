@@ -15,7 +15,7 @@ public sealed class VersionWellFormedCheck : ICheck
         "Consumers' tools order and resolve versions by SemVer precedence; a malformed version sorts wrongly, "
         + "is normalised into something else by the registry, or is refused.",
         "Write the version as MAJOR.MINOR.PATCH with an optional -prerelease label and +build metadata, without "
-        + "leading zeros; use a fourth number only if the checklist allows it (with: allow-four-parts: true).")
+        + "leading zeros; use a fourth number only if the checklist allows it (settings: allow-four-parts: true).")
     {
         Settings = ["allow-four-parts"],
     };

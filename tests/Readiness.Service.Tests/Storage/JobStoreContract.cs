@@ -1,22 +1,20 @@
 using Microsoft.Extensions.Time.Testing;
 using Readiness.Service.Storage;
-using Readiness.Testing;
 
 namespace Readiness.Service.Tests.Storage;
 
-public sealed class JobStoreTests : IDisposable
+/// <summary>What every job store does; run against SQLite and PostgreSQL by the classes deriving from it.</summary>
+public abstract class JobStoreContract : IDisposable
 {
     private static readonly TimeSpan Lease = TimeSpan.FromSeconds(30);
-    private readonly TempDirectory folder = new("readiness-jobs-");
+    private readonly IStoreBackend backend;
     private readonly FakeTimeProvider time = new(new DateTimeOffset(2026, 11, 20, 12, 0, 0, TimeSpan.Zero));
-    private readonly Database database;
-    private readonly JobStore jobs;
+    private readonly IJobStore jobs;
 
-    public JobStoreTests()
+    protected JobStoreContract(IStoreBackend backend)
     {
-        database = new Database(folder.Combine("readiness.db"));
-        database.Initialize();
-        jobs = new JobStore(database, time);
+        this.backend = backend;
+        jobs = backend.Jobs(time);
     }
 
     [Fact]
@@ -84,6 +82,28 @@ public sealed class JobStoreTests : IDisposable
     }
 
     [Fact]
+    public async Task JobThatKillsEveryWorker_FailsAtTheAttemptLimit_WithAClearStatus()
+    {
+        var limited = backend.Jobs(time, new JobStoreOptions(MaxAttempts: 3));
+        var queued = await limited.RecordDeliveryAsync("d-1", "pull_request", Request(1, "a"), default);
+        for (var attempt = 1; attempt <= 3; attempt++)
+        {
+            var claimed = await limited.ClaimAsync($"worker-{attempt}", Lease, default);
+            Assert.Equal(JobState.Running, claimed?.State);
+            Assert.Equal(attempt, claimed?.Attempts);
+            time.Advance(Lease + TimeSpan.FromSeconds(1)); // the worker died: nobody renews
+        }
+
+        var given = await limited.ClaimAsync("worker-4", Lease, default);
+        Assert.Equal(queued.JobId, given?.Id);
+        Assert.Equal(JobState.Failed, given?.State);
+        Assert.Equal(3, given?.Attempts);
+        Assert.Contains("lease ran out", given?.Error, StringComparison.Ordinal);
+        Assert.Null(await limited.ClaimAsync("worker-5", Lease, default));
+        Assert.Equal(JobState.Failed, limited.Find(queued.JobId!.Value)?.State);
+    }
+
+    [Fact]
     public async Task RenewedLease_KeepsTheJob()
     {
         await jobs.RecordDeliveryAsync("d-1", "pull_request", Request(1, "a"), default);
@@ -108,7 +128,7 @@ public sealed class JobStoreTests : IDisposable
     [Fact]
     public async Task QuietPeriod_DelaysTheJobUntilEventsStop()
     {
-        var quiet = new JobStore(database, time, TimeSpan.FromSeconds(2));
+        var quiet = backend.Jobs(time, new JobStoreOptions(TimeSpan.FromSeconds(2)));
         await quiet.RecordDeliveryAsync("d-1", "pull_request", Request(1, "a"), default);
         time.Advance(TimeSpan.FromSeconds(1.5));
         await quiet.RecordDeliveryAsync("d-2", "pull_request", Request(1, "b"), default);
@@ -121,6 +141,21 @@ public sealed class JobStoreTests : IDisposable
     }
 
     [Fact]
+    public async Task EventsThatNeverStop_StillRunOnceTheQuietCapPasses()
+    {
+        var quiet = backend.Jobs(time, new JobStoreOptions(TimeSpan.FromSeconds(2), MaxQuietPeriod: TimeSpan.FromSeconds(10)));
+        for (var i = 0; i < 12; i++)
+        {
+            await quiet.RecordDeliveryAsync($"d-{i}", "pull_request", Request(1, i.ToString("x", System.Globalization.CultureInfo.InvariantCulture)), default);
+            time.Advance(TimeSpan.FromSeconds(1));
+        }
+
+        // 12 s of events one second apart: without the cap the job would still wait; the cap ends 10 s after the first.
+        var job = await quiet.ClaimAsync("w1", Lease, default);
+        Assert.Equal(Sha("b"), job?.Request.HeadSha);
+    }
+
+    [Fact]
     public async Task IgnoredEvent_IsRememberedButQueuesNothing()
     {
         var first = await jobs.RecordDeliveryAsync("d-9", "push", null, default);
@@ -128,6 +163,72 @@ public sealed class JobStoreTests : IDisposable
         Assert.Equal(EnqueueOutcome.Ignored, first.Outcome);
         Assert.Equal(EnqueueOutcome.Duplicate, again.Outcome);
         Assert.Empty(jobs.CountByState());
+    }
+
+    [Fact]
+    public async Task FullRepositoryQueue_RefusesWithoutRecording_AndOtherRepositoriesStillQueue()
+    {
+        var bounded = backend.Jobs(time, new JobStoreOptions(MaxQueuedPerRepository: 2));
+        Assert.Equal(EnqueueOutcome.Queued, (await bounded.RecordDeliveryAsync("d-1", "pull_request", Request(1, "a"), default)).Outcome);
+        Assert.Equal(EnqueueOutcome.Queued, (await bounded.RecordDeliveryAsync("d-2", "pull_request", Request(2, "b"), default)).Outcome);
+        Assert.Equal(EnqueueOutcome.QueueFull, (await bounded.RecordDeliveryAsync("d-3", "pull_request", Request(3, "c"), default)).Outcome);
+
+        // An event for a pull request already queued still collapses; another repository has its own room.
+        Assert.Equal(EnqueueOutcome.Collapsed, (await bounded.RecordDeliveryAsync("d-4", "pull_request", Request(1, "d"), default)).Outcome);
+        Assert.Equal(EnqueueOutcome.Queued, (await bounded.RecordDeliveryAsync("d-5", "pull_request", Request(3, "e", repository: "bramblecote/lanternfly"), default)).Outcome);
+
+        // The refused delivery was not remembered: its redelivery is taken once there is room.
+        await bounded.ClaimAsync("w1", Lease, default);
+        Assert.Equal(EnqueueOutcome.Queued, (await bounded.RecordDeliveryAsync("d-3", "pull_request", Request(3, "c"), default)).Outcome);
+    }
+
+    [Fact]
+    public async Task BusyRepository_LeavesWorkersForOthers()
+    {
+        var fair = backend.Jobs(time, new JobStoreOptions(MaxRunningPerRepository: 2));
+        for (var pr = 1; pr <= 5; pr++)
+        {
+            await fair.RecordDeliveryAsync($"busy-{pr}", "pull_request", Request(pr, "a"), default);
+        }
+
+        await fair.RecordDeliveryAsync("other-1", "pull_request", Request(1, "b", repository: "bramblecote/lanternfly"), default);
+        var claimed = new List<Job>();
+        while (await fair.ClaimAsync("w", Lease, default) is { } job)
+        {
+            claimed.Add(job);
+        }
+
+        Assert.Equal(2, claimed.Count(j => j.Request.Repository == "bramblecote/sketches"));
+        Assert.Single(claimed, j => j.Request.Repository == "bramblecote/lanternfly");
+    }
+
+    [Fact]
+    public async Task QueueStatus_GivesDepthAndTheOldestWaitingJobsAge()
+    {
+        Assert.Equal(new QueueStatus(0, 0, null), jobs.Status());
+        await jobs.RecordDeliveryAsync("d-1", "pull_request", Request(1, "a"), default);
+        time.Advance(TimeSpan.FromSeconds(40));
+        await jobs.RecordDeliveryAsync("d-2", "pull_request", Request(2, "b"), default);
+        await jobs.RecordDeliveryAsync("d-3", "pull_request", Request(3, "c"), default);
+        time.Advance(TimeSpan.FromSeconds(2));
+        await jobs.ClaimAsync("w1", Lease, default);
+        Assert.Equal(new QueueStatus(2, 1, TimeSpan.FromSeconds(2)), jobs.Status());
+    }
+
+    [Fact]
+    public async Task Prune_RemovesOldDeliveriesAndFinishedJobs_KeepsWaitingOnes()
+    {
+        await jobs.RecordDeliveryAsync("old-1", "pull_request", Request(1, "a"), default);
+        var done = (await jobs.ClaimAsync("w1", Lease, default))!;
+        await jobs.FinishAsync(done.Id, "w1", JobState.Done, null, null, default);
+        await jobs.RecordDeliveryAsync("old-2", "pull_request", Request(2, "b"), default);
+        time.Advance(TimeSpan.FromDays(31));
+        await jobs.RecordDeliveryAsync("new-1", "push", null, default);
+
+        Assert.Equal(3, await jobs.PruneAsync(TimeSpan.FromDays(30), default)); // two deliveries, one finished job
+        Assert.Null(jobs.Find(done.Id));
+        Assert.Equal(1, jobs.CountByState()[JobState.Queued]);
+        Assert.Equal(EnqueueOutcome.Duplicate, (await jobs.RecordDeliveryAsync("new-1", "push", null, default)).Outcome);
     }
 
     [Fact]
@@ -145,13 +246,12 @@ public sealed class JobStoreTests : IDisposable
 
     public void Dispose()
     {
-        database.Dispose();
-        Microsoft.Data.Sqlite.SqliteConnection.ClearAllPools();
-        folder.Dispose();
+        backend.Dispose();
+        GC.SuppressFinalize(this);
     }
 
-    private static string Sha(string seed) => seed.PadLeft(40, '0');
+    protected static string Sha(string seed) => seed.PadLeft(40, '0');
 
-    private static JobRequest Request(int pr, string sha, string? body = null) =>
-        new("bramblecote/sketches", "file:///nowhere.git", null, pr, Sha(sha), "main", body, null);
+    protected static JobRequest Request(int pr, string sha, string? body = null, string repository = "bramblecote/sketches") =>
+        new(repository, "file:///nowhere.git", null, pr, Sha(sha), "main", body, null);
 }

@@ -1,0 +1,11 @@
+using Readiness.Service.Storage;
+
+namespace Readiness.Service.Tests.Storage;
+
+/// <summary>One store kind for the contract tests: a fresh, empty database per test class instance.</summary>
+public interface IStoreBackend : IDisposable
+{
+    IJobStore Jobs(TimeProvider time, JobStoreOptions? options = null);
+
+    IRunStore Runs(TimeProvider time);
+}
