@@ -72,6 +72,8 @@ public sealed class HookTests : IDisposable
         Assert.Contains("changelog.has-entry", result.StdErr, StringComparison.Ordinal);
         Assert.Contains("CHANGELOG.md:", result.StdErr, StringComparison.Ordinal);
         Assert.DoesNotContain("CHANGELOG.md, CHANGELOG.md", result.StdErr, StringComparison.Ordinal);
+        // The summary is worded as in every report: verdict, then "N blocking; N fail, N error, N manual, N skip, N pass".
+        Assert.Matches(@"readiness: v1\.3\.0 \([0-9a-f]{7}\) NOT READY — [1-9][0-9]* blocking; [0-9]+ fail, [0-9]+ error, [0-9]+ manual, [0-9]+ skip, [0-9]+ pass", result.StdErr);
 
         // The way to the full report names the tag, so it judges the same version and signature as the hook did.
         Assert.Contains("full report: readiness check --ref v1.3.0 --format html", result.StdErr, StringComparison.Ordinal);

@@ -97,10 +97,9 @@ public sealed class PrePushRunner(Composition composition, CliConsole console)
     private async Task WriteAsync(PushedRef pushed, Report report, IReadOnlyList<CheckResult> blocking, IReadOnlyList<CheckResult> waived, Waivers waivers, bool ready)
     {
         var name = pushed.TagName ?? pushed.BranchName ?? pushed.RemoteRef;
-        var s = report.Summary;
-        var warnings = report.Results.Count(r => r.Severity == Severity.Warn && r.Status == CheckStatus.Fail);
+        // Worded as in every report (ReportWording); the blocking count leaves out what this push waived.
         await console.Error.WriteLineAsync(
-            $"readiness: {name} ({report.Subject.Commit[..7]}) {(ready ? "READY" : "NOT READY")} — {blocking.Count} blocking, {warnings} warning(s), {s.Pass} passed, {s.Skip} skipped").ConfigureAwait(false);
+            $"readiness: {name} ({report.Subject.Commit[..7]}) {Rendering.ReportWording.Verdict(ready)} — {Rendering.ReportWording.Counts(report.Summary, blocking.Count)}").ConfigureAwait(false);
         foreach (var result in blocking)
         {
             var where = result.Evidence.Count > 0 ? "  " + string.Join(", ", result.Evidence) : string.Empty;
