@@ -113,6 +113,19 @@ public sealed class HookScriptTests : IDisposable
     }
 
     [Fact]
+    public void LongLines_AreSkipped_AndBlanksAroundShortValuesTrimmed()
+    {
+        // A 100 KB run of spaces after a value: the line is skipped (and reading stops at 64 KiB) (the trim is one expansion, not a loop per
+        // character); a value with blanks around it on a short line is still read. YAML 1.2 §7.3.3: plain scalars
+        // carry no surrounding white space.
+        var config = "release-branches:   main   \ntag-pattern: 'nope-*'" + new string(' ', 100_000) + "\n";
+        var (exit, trace, _) = RunHook(config, $"refs/heads/main {Oid} refs/heads/main {Zero}\nrefs/tags/v1.0.0 {Oid} refs/tags/v1.0.0 {Zero}\n");
+        Assert.Equal(1, exit); // a release: readiness is not on this PATH
+        Assert.Contains("release branch main", trace, StringComparison.Ordinal);
+        Assert.Contains("release tag v1.0.0", trace, StringComparison.Ordinal); // the default v*, the long line unread
+    }
+
+    [Fact]
     public void ChainedHook_GetsGitsLinesUnchanged_AndItsFailureBlocks()
     {
         // githooks(5), pre-push: one line per ref, "<local ref> SP <local oid> SP <remote ref> SP <remote oid> LF".

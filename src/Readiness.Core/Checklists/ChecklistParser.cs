@@ -35,7 +35,7 @@ public sealed class ChecklistParser(IReadOnlySet<string> knownCheckIds)
         {
             if (!knownCheckIds.Contains(entry.Key))
             {
-                throw new ConfigurationException(entry.KeyMark, $"unknown check id '{entry.Key}'{NameSuggestion.Hint(entry.Key, knownCheckIds)} (see 'readiness explain' or checklists/README.md)");
+                throw new ConfigurationException(entry.KeyMark, $"unknown check id '{ConfigQuote.Of(entry.Key)}'{NameSuggestion.Hint(entry.Key, knownCheckIds)} (see 'readiness explain' or checklists/README.md)");
             }
 
             result.Add(new(entry.Key, ParseSettings(entry.Key, entry.Value)));
@@ -73,7 +73,7 @@ public sealed class ChecklistParser(IReadOnlySet<string> knownCheckIds)
             }
             else
             {
-                throw new ConfigurationException(s.Value.Mark, $"severity must be block, warn, info or off, not '{text}'");
+                throw new ConfigurationException(s.Value.Mark, $"severity must be block, warn, info or off, not '{ConfigQuote.Of(text)}'");
             }
         }
 
@@ -111,7 +111,7 @@ public sealed class ChecklistParser(IReadOnlySet<string> knownCheckIds)
 
             if (items.Any(i => i.Id == id))
             {
-                throw new ConfigurationException(map.Mark, $"duplicate manual item id '{id}'");
+                throw new ConfigurationException(map.Mark, $"duplicate manual item id '{ConfigQuote.Of(id)}'");
             }
 
             items.Add(new ManualItem(id, text, severity));

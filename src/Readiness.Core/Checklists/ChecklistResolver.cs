@@ -13,7 +13,7 @@ public sealed class ChecklistResolver(IChecklistSource source, ChecklistParser p
         var found = source.Find(name)
             ?? throw new ConfigurationException(
                 requestedAt ?? new ConfigMark("(command line)", 1, 1),
-                $"no checklist named '{name}' (available: {string.Join(", ", source.Names)})");
+                $"no checklist named '{ConfigQuote.Of(name)}' (available: {string.Join(", ", source.Names)})");
         return parser.Parse(found.File, found.Text);
     }
 

@@ -31,11 +31,11 @@ public static class RepositoryChecklist
 
         if (path.StartsWith('/') || normalized.Split('/').Contains(".."))
         {
-            throw new ConfigurationException(requestedAt, $"checklist: '{path}' must be a path inside the repository");
+            throw new ConfigurationException(requestedAt, $"checklist: '{ConfigQuote.Of(path)}' must be a path inside the repository");
         }
 
         var text = files.ReadText(normalized, YamlReader.MaxChars)
-            ?? throw new ConfigurationException(requestedAt, $"checklist: '{path}' names no file at the inspected commit (a built-in name, or a path such as ci/checklist.yml)");
+            ?? throw new ConfigurationException(requestedAt, $"checklist: '{ConfigQuote.Of(path)}' names no file at the inspected commit (a built-in name, or a path such as ci/checklist.yml)");
         return parser.Parse(normalized, text);
     }
 }

@@ -1,3 +1,4 @@
+using Readiness.Core.Checks.Build;
 using Readiness.Core.Checks.Changelog;
 using Readiness.Core.Checks.Deps;
 using Readiness.Core.Checks.License;
@@ -18,6 +19,7 @@ public static class BuiltInChecks
 {
     public static IReadOnlyList<ICheck> Create() =>
     [
+        new BuildReadableCheck(),
         new ChangelogHasEntryCheck(),
         new ChangelogLinksCheck(),
         new ChangelogPresentCheck(),

@@ -33,7 +33,7 @@ public static class ConfigNodeExtensions
             {
                 throw new ConfigurationException(
                     entry.KeyMark,
-                    $"unknown key '{entry.Key}' in {where} (known: {string.Join(", ", allowed)})");
+                    $"unknown key '{ConfigQuote.Of(entry.Key)}' in {where} (known: {string.Join(", ", allowed)})");
             }
         }
     }

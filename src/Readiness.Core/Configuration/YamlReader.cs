@@ -125,7 +125,7 @@ public static class YamlReader
 
                         if (entries.Any(e => e.Key == key.Value))
                         {
-                            throw new ConfigurationException(keyMark, $"duplicate key '{key.Value}'");
+                            throw new ConfigurationException(keyMark, $"duplicate key '{ConfigQuote.Of(key.Value)}'");
                         }
 
                         entries.Add(new ConfigEntry(key.Value, keyMark, ReadNode(depth + 1)));

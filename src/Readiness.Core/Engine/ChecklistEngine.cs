@@ -61,7 +61,8 @@ public sealed class ChecklistEngine(CheckCatalog catalog, TimeProvider time)
             input.Release.Version,
             input.Checklist.Name,
             input.Snapshot.Inspected);
-        return new Report(subject, summary.Blocking == 0, summary, results, now, input.Notes);
+        // A value the secrets check flagged never appears elsewhere in the report, whichever check quoted it.
+        return Secrets.ReportRedactor.Redact(new Report(subject, summary.Blocking == 0, summary, results, now, input.Notes), input.Snapshot.Files);
     }
 
     private static IEnumerable<CheckResult> RunOne(ICheck check, PlannedCheck planned, EngineInput input, DateTimeOffset now)

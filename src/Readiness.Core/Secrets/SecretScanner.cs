@@ -104,6 +104,34 @@ public static class SecretScanner
             : null;
     }
 
+    /// <summary>The texts every shape matches in <paramref name="content"/> (whole match and body), placeholders left out.</summary>
+    public static IEnumerable<string> MatchedValues(string content)
+    {
+        ArgumentNullException.ThrowIfNull(content);
+        foreach (var shape in SecretShapes.All)
+        {
+            if (!shape.Prefixes.Any(p => content.Contains(p, StringComparison.Ordinal)))
+            {
+                continue;
+            }
+
+            foreach (var match in shape.Pattern.Matches(content).Cast<System.Text.RegularExpressions.Match>())
+            {
+                var body = match.Groups["body"];
+                if (body.Success && shape.Id != "private-key" && !SecretShape.LooksRandom(body.Value))
+                {
+                    continue;
+                }
+
+                yield return match.Value;
+                if (body.Success && body.Length >= 16)
+                {
+                    yield return body.Value;
+                }
+            }
+        }
+    }
+
     /// <summary>Every shape match in one text, with its line; placeholders are left out.</summary>
     public static IEnumerable<SecretHit> ScanText(string path, string content)
     {
