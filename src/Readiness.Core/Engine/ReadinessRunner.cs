@@ -82,7 +82,11 @@ public sealed class ReadinessRunner(
         var notes = new List<string>();
         notes.AddRange(checklist.Checks.Where(c => engine.Catalog.Find(c.Id) is null)
             .Select(c => $"{c.Id} is in the checklist but this version of the tool does not implement it yet; it did not run."));
-        notes.AddRange(model.Problems.Select(p => p.Line is { } line ? $"{p.Path}:{line}: {p.Message}" : $"{p.Path}: {p.Message}"));
+        notes.AddRange(snapshot.Notes);
+        notes.AddRange(snapshot.Files.Unread.Select(u => u.ToString()));
+        // Unreadable project files are build.readable's errors when the checklist runs it, notes otherwise.
+        var readableRuns = checklist.Checks.Any(c => c.Id == Checks.CheckIds.BuildReadable);
+        notes.AddRange(model.Problems.Where(p => !readableRuns || p.Kind != ProjectProblemKind.Unreadable).Select(p => p.ToString()));
         if (model.Projects.Count == 0)
         {
             notes.Add($"No .NET project was read; {BuildInventory.ProjectsRequiredKey}: false in {RepositoryConfig.FileName} allows that.");
@@ -107,7 +111,16 @@ public sealed class ReadinessRunner(
     public RepositoryConfig ReadConfig(IFileTree files)
     {
         ArgumentNullException.ThrowIfNull(files);
-        var text = files.ReadText(RepositoryConfig.FileName, YamlReader.MaxChars);
+        string? text;
+        try
+        {
+            text = files.ReadText(RepositoryConfig.FileName, YamlReader.MaxChars);
+        }
+        catch (FileTooLargeException e)
+        {
+            throw new ConfigurationException(new ConfigMark(RepositoryConfig.FileName, 1, 1), $"the file is {e.Size:N0} bytes, above the {e.Limit:N0}-byte limit; it was not read");
+        }
+
         return text is null ? RepositoryConfig.Empty : new RepositoryConfigParser(Parser).Parse(RepositoryConfig.FileName, text);
     }
 

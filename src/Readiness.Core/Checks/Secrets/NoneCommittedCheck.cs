@@ -35,14 +35,15 @@ public sealed class NoneCommittedCheck : ICheck
     public IEnumerable<Finding> Run(CheckContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
-        var scanned = SecretScanner.Scan(context.Snapshot.Files);
-        var extra = Notes(scanned);
-        var result = scanned;
+        var scan = SecretScanner.Scan(context.Snapshot.Files);
+        var extra = Notes(scan);
+        var scanned = $"{scan.TextFiles + scan.BinaryFiles} tracked files ({scan.TextFiles} scanned as text, {scan.BinaryFiles} binary checked by name and format)";
+        var result = scan;
         if (!context.Parameters.Bool(PrivateStrongNameKey))
         {
             // .NET library guidance (strong naming) recommends committing the key pair of an open-source library so
             // that anyone can build it: it identifies, it does not secure. Information, unless configured private.
-            var keys = scanned.Hits.Where(h => h.Kind == KeyFiles.StrongNameKeyPair).ToList();
+            var keys = scan.Hits.Where(h => h.Kind == KeyFiles.StrongNameKeyPair).ToList();
             foreach (var key in keys)
             {
                 yield return Finding.Pass(
@@ -53,14 +54,15 @@ public sealed class NoneCommittedCheck : ICheck
                     new Evidence(key.Path));
             }
 
-            result = scanned with { Hits = scanned.Hits.Except(keys).ToList() };
+            result = scan with { Hits = scan.Hits.Except(keys).ToList() };
         }
 
         if (result.Hits.Count == 0)
         {
-            yield return Finding.Pass(
-                $"No secret found in {result.TextFiles + result.BinaryFiles} tracked files ({result.TextFiles} scanned as text, "
-                + $"{result.BinaryFiles} binary checked by name and format).{extra}");
+            // A file that could not be scanned may hold anything: the check cannot pass on it.
+            yield return extra.Length == 0
+                ? Finding.Pass($"No secret found in {scanned}.")
+                : Finding.Error($"No secret found in {scanned}, but not every file could be scanned:{extra}", null, [.. Gaps(result)]);
             yield break;
         }
 
@@ -87,9 +89,12 @@ public sealed class NoneCommittedCheck : ICheck
 
         if (extra.Length > 0)
         {
-            yield return Finding.Skip("Not every file could be scanned:" + extra);
+            yield return Finding.Error("Not every file could be scanned:" + extra, null, [.. Gaps(result)]);
         }
     }
+
+    private static IEnumerable<Evidence> Gaps(SecretScanResult result) =>
+        result.TooLarge.Take(MaxLinesPerFile).Select(p => new Evidence(p));
 
     private static string Notes(SecretScanResult result)
     {

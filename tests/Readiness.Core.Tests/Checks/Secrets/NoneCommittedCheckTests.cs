@@ -75,6 +75,31 @@ public sealed class NoneCommittedCheckTests
     }
 
     [Fact]
+    public void NuGetConfigThatIsNotXml_IsAnError_NeverAPass()
+    {
+        // nuget.config reference: the file is XML; one that does not parse cannot be checked for credentials.
+        var files = new InMemoryFileTree().Add("nuget.config", "<configuration>\n<<packageSourceCredentials><feed><add key=\"ClearTextPassword\" value=\"x\" />\n");
+
+        var finding = Assert.Single(Run(new NoneCommittedCheck(), files: files));
+
+        Assert.Equal(CheckStatus.Error, finding.Status);
+        Assert.Contains("nuget.config", finding.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void NuGetConfigWithAUtf8ByteOrderMark_IsScanned()
+    {
+        byte[] bom = [0xEF, 0xBB, 0xBF];
+        var files = new InMemoryFileTree().Add("nuget.config", [.. bom, .. System.Text.Encoding.UTF8.GetBytes(
+            "<configuration><packageSourceCredentials><feed><add key=\"Username\" value=\"dev\" /><add key=\"ClearTextPassword\" value=\"s3cr3t-value\" /></feed></packageSourceCredentials></configuration>")]);
+
+        var finding = Assert.Single(Run(new NoneCommittedCheck(), files: files));
+
+        Assert.Equal(CheckStatus.Fail, finding.Status);
+        Assert.DoesNotContain("s3cr3t-value", finding.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void StrongNameKeyPair_IsInformation_UnlessConfiguredPrivate()
     {
         // .NET library guidance (strong naming): an open-source library should commit its .snk so anyone can build it.
