@@ -18,6 +18,7 @@ public static class BuiltInChecks
 {
     public static IReadOnlyList<ICheck> Create() =>
     [
+        new Build.BuildReadableCheck(),
         new ChangelogHasEntryCheck(),
         new ChangelogLinksCheck(),
         new ChangelogPresentCheck(),
