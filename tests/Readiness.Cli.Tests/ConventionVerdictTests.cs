@@ -164,6 +164,26 @@ public sealed class ConventionVerdictTests
     }
 
     [Fact]
+    public async Task PackScriptThatNoCiRuns_IsNoEvidenceForThisRelease()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02")
+            .Write("src/Bramble.Sketches.Contracts/Bramble.Sketches.Contracts.csproj", BareProject.Replace("</TargetFramework>", "</TargetFramework><Version>0.4.0</Version>", StringComparison.Ordinal))
+            .Write(".github/workflows/release.yml", SampleLibrary.Workflow + "      - run: ./pack.sh\n")
+            .Write("pack.sh", "dotnet pack src/Bramble.Sketches/Bramble.Sketches.csproj\n")
+            .Write("pack-contracts.sh", "dotnet pack src/Bramble.Sketches.Contracts/Bramble.Sketches.Contracts.csproj\n")
+            .Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (exit, output, error) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        // The workflow runs pack.sh; pack-contracts.sh is released on its own schedule, so its 0.4.0 is not judged here.
+        Assert.True(exit == 0, output + error);
+        Assert.Contains(Notes(output), n => n.Contains("Bramble.Sketches.csproj (packed by the command at pack.sh:1)", StringComparison.Ordinal));
+        Assert.Contains(Notes(output), n => n.Contains("Bramble.Sketches.Contracts.csproj (not named by the pack commands (pack.sh:1))", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public async Task PackagesListInConfiguration_ComesFirst()
     {
         using var repo = TestRepository.Create();

@@ -30,28 +30,17 @@ public sealed partial record PackCommands(
         var named = new List<(string, SourceLocation)>();
         var all = new List<SourceLocation>();
         var versions = new List<SourceLocation>();
-        var scripts = files.Paths
+        var candidates = files.Paths
             .Where(p => ScriptFolders.Contains(RepoPath.Directory(p), StringComparer.OrdinalIgnoreCase)
                 && ScriptExtensions.Any(e => p.EndsWith(e, StringComparison.OrdinalIgnoreCase))
                 && !StaticProjectReaderIsProject(p))
-            .Take(MaxScripts);
-        foreach (var path in scripts)
+            .Take(MaxScripts)
+            .Select(p => (Path: p, Text: TryRead(files, p)))
+            .Where(x => x.Text is not null)
+            .ToList();
+        var scripts = Reached(candidates!);
+        foreach (var (path, text) in scripts)
         {
-            string? text;
-            try
-            {
-                text = files.ReadText(path, MaxScriptBytes);
-            }
-            catch (FileTooLargeException)
-            {
-                continue;
-            }
-
-            if (text is null)
-            {
-                continue;
-            }
-
             var lines = text.Split('\n');
             var literals = new List<(string Target, SourceLocation At)>();
             for (var i = 0; i < lines.Length; i++)
@@ -116,6 +105,53 @@ public sealed partial record PackCommands(
         }
 
         return null;
+    }
+
+    private static readonly string[] CiFiles = ["appveyor.yml", ".appveyor.yml", ".gitlab-ci.yml", "azure-pipelines.yml", ".travis.yml"];
+
+    /// <summary>
+    /// The scripts a release runs: with CI files present, those files and the scripts they name (by file name),
+    /// followed transitively; a script nothing runs (a one-off or a second product's) says nothing about this release.
+    /// Without CI files, every script.
+    /// </summary>
+    private static List<(string Path, string Text)> Reached(List<(string Path, string Text)> candidates)
+    {
+        static bool IsCi(string path) =>
+            RepoPath.Directory(path).Equals(".github/workflows", StringComparison.OrdinalIgnoreCase)
+            || RepoPath.Directory(path).StartsWith(".azure-pipelines", StringComparison.OrdinalIgnoreCase)
+            || CiFiles.Contains(RepoPath.FileName(path), StringComparer.OrdinalIgnoreCase);
+
+        var reached = candidates.Where(c => IsCi(c.Path)).ToList();
+        if (reached.Count == 0)
+        {
+            return candidates;
+        }
+
+        var pending = new Queue<(string Path, string Text)>(reached);
+        while (pending.Count > 0)
+        {
+            var from = pending.Dequeue();
+            foreach (var next in candidates.Where(c => !reached.Contains(c)
+                && from.Text.Contains(RepoPath.FileName(c.Path), StringComparison.OrdinalIgnoreCase)).ToList())
+            {
+                reached.Add(next);
+                pending.Enqueue(next);
+            }
+        }
+
+        return reached;
+    }
+
+    private static string? TryRead(IFileTree files, string path)
+    {
+        try
+        {
+            return files.ReadText(path, MaxScriptBytes);
+        }
+        catch (FileTooLargeException)
+        {
+            return null;
+        }
     }
 
     private static bool StaticProjectReaderIsProject(string path) => ProjectSuffixes.Any(s => path.EndsWith(s, StringComparison.OrdinalIgnoreCase));
