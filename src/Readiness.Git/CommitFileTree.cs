@@ -16,15 +16,18 @@ public sealed class CommitFileTree : IFileTree, IDisposable
     private readonly Lock gate = new();
     private bool disposed;
 
-    private CommitFileTree(Repository repository, bool ownsRepository, Dictionary<string, ObjectId> blobs, string[] paths)
+    private CommitFileTree(Repository repository, bool ownsRepository, Dictionary<string, ObjectId> blobs, string[] paths, IReadOnlyList<UnreadEntry> unread)
     {
         this.repository = repository;
         this.ownsRepository = ownsRepository;
         this.blobs = blobs;
         Paths = paths;
+        Unread = unread;
     }
 
     public IReadOnlyList<string> Paths { get; }
+
+    public IReadOnlyList<UnreadEntry> Unread { get; }
 
     /// <summary>Lists every blob of <paramref name="commit"/>'s tree (submodule entries skipped).</summary>
     public static CommitFileTree Create(Repository repository, Commit commit, bool ownsRepository)
@@ -32,9 +35,10 @@ public sealed class CommitFileTree : IFileTree, IDisposable
         ArgumentNullException.ThrowIfNull(repository);
         ArgumentNullException.ThrowIfNull(commit);
         var blobs = new Dictionary<string, ObjectId>(StringComparer.Ordinal);
+        var unread = new List<UnreadEntry>();
         try
         {
-            Collect(commit.Tree, string.Empty, blobs);
+            Collect(commit.Tree, blobs, unread);
         }
         catch (LibGit2SharpException e)
         {
@@ -43,7 +47,7 @@ public sealed class CommitFileTree : IFileTree, IDisposable
 
         var paths = blobs.Keys.ToArray();
         Array.Sort(paths, StringComparer.Ordinal);
-        return new CommitFileTree(repository, ownsRepository, blobs, paths);
+        return new CommitFileTree(repository, ownsRepository, blobs, paths, unread);
     }
 
     public bool Exists(string path) => path is not null && blobs.ContainsKey(path);
@@ -150,28 +154,65 @@ public sealed class CommitFileTree : IFileTree, IDisposable
         }
     }
 
-    private static void Collect(Tree tree, string prefix, Dictionary<string, ObjectId> blobs)
+    /// <summary>
+    /// Lists the tree without recursion: a stack of (tree, folder path, depth). Each folder's path is built once from
+    /// its parent's, and nothing below <see cref="FileLimits.MaxFolderDepth"/> is entered.
+    /// </summary>
+    private static void Collect(Tree root, Dictionary<string, ObjectId> blobs, List<UnreadEntry> unread)
     {
-        foreach (var entry in tree)
+        var pending = new Stack<(Tree Tree, string Prefix, int Depth)>();
+        pending.Push((root, string.Empty, 0));
+        while (pending.TryPop(out var current))
         {
-            switch (entry.TargetType)
+            foreach (var entry in current.Tree)
             {
-                case TreeEntryTargetType.Blob:
-                    if (blobs.Count >= FileLimits.MaxPaths)
-                    {
-                        throw new RepositoryInspectionException(
-                            $"The commit holds more than {FileLimits.MaxPaths:N0} files; the repository is refused as too large to inspect.");
-                    }
+                var path = current.Prefix + entry.Name;
+                switch (entry.TargetType)
+                {
+                    case TreeEntryTargetType.Blob when entry.Mode == Mode.SymbolicLink:
+                        // The blob holds the link's target text; git checks it out as a link, never as this content.
+                        unread.Add(new UnreadEntry(path, $"is a symbolic link (to {LinkTarget(entry)}); links are not followed"));
+                        break;
+                    case TreeEntryTargetType.Blob:
+                        if (blobs.Count >= FileLimits.MaxPaths)
+                        {
+                            throw new RepositoryInspectionException(
+                                $"The commit holds more than {FileLimits.MaxPaths:N0} files; the repository is refused as too large to inspect.");
+                        }
 
-                    blobs[prefix + entry.Name] = entry.Target.Id;
-                    break;
-                case TreeEntryTargetType.Tree:
-                    Collect((Tree)entry.Target, prefix + entry.Name + "/", blobs);
-                    break;
-                default:
-                    // Submodule entries (gitlinks) name a commit of another repository: not a file of this one.
-                    break;
+                        blobs[path] = entry.Target.Id;
+                        break;
+                    case TreeEntryTargetType.Tree when current.Depth + 1 >= FileLimits.MaxFolderDepth:
+                        unread.Add(new UnreadEntry(path, $"is nested {current.Depth + 1} folders deep; nothing below {FileLimits.MaxFolderDepth} levels is read"));
+                        break;
+                    case TreeEntryTargetType.Tree:
+                        pending.Push(((Tree)entry.Target, path + "/", current.Depth + 1));
+                        break;
+                    default:
+                        // Submodule entries (gitlinks) name a commit of another repository: not a file of this one.
+                        unread.Add(new UnreadEntry(path, $"is a submodule (commit {entry.Target.Sha}); its files are not part of this repository's inspection"));
+                        break;
+                }
             }
+        }
+    }
+
+    private static string LinkTarget(TreeEntry entry)
+    {
+        try
+        {
+            var blob = (Blob)entry.Target;
+            if (blob.Size > 1024)
+            {
+                return "a target longer than 1 KiB";
+            }
+
+            using var reader = new StreamReader(blob.GetContentStream(), System.Text.Encoding.UTF8);
+            return reader.ReadToEnd();
+        }
+        catch (LibGit2SharpException)
+        {
+            return "an unreadable target";
         }
     }
 }

@@ -16,7 +16,8 @@ namespace Readiness.Git;
 /// </remarks>
 public sealed partial class GitSignatureVerifier : ISignatureVerifier
 {
-    private static readonly string[] ScrubbedVariables =
+    /// <summary>git's variables that could point it elsewhere or make it run programs; removed from its environment.</summary>
+    internal static readonly string[] ScrubbedVariables =
     [
         "GIT_DIR", "GIT_WORK_TREE", "GIT_INDEX_FILE", "GIT_OBJECT_DIRECTORY", "GIT_ALTERNATE_OBJECT_DIRECTORIES",
         "GIT_NAMESPACE", "GIT_CONFIG", "GIT_CONFIG_PARAMETERS", "GIT_CONFIG_COUNT", "GIT_COMMON_DIR",

@@ -44,7 +44,8 @@ public sealed class GitSnapshotSource : ISnapshotSource
         var files = CommitFileTree.Create(repository, commit, ownsRepository: true);
         try
         {
-            var tags = TagReader.ReachableTags(repository, commit);
+            var notes = new List<string>();
+            var tags = TagReader.ReachableTags(repository, commit, notes);
             return new ReleaseSnapshot(
                 Location(repository),
                 commit.Sha,
@@ -55,7 +56,10 @@ public sealed class GitSnapshotSource : ISnapshotSource
                 commit.Committer.When,
                 CommitSignature(repository, commit),
                 tags,
-                new GitSignatureVerifier(repository.Info.Path));
+                new GitSignatureVerifier(repository.Info.Path))
+            {
+                Notes = notes,
+            };
         }
         catch
         {
@@ -76,6 +80,8 @@ public sealed class GitSnapshotSource : ISnapshotSource
 
             var head = ResolveCommit(repository, "HEAD");
             var files = WorkingTreeFileTree.Create(repository);
+            var notes = new List<string>();
+            var tags = TagReader.ReachableTags(repository, head, notes);
             return new ReleaseSnapshot(
                 Location(repository),
                 head.Sha,
@@ -85,8 +91,11 @@ public sealed class GitSnapshotSource : ISnapshotSource
                 ReleaseTag(repository, request),
                 head.Committer.When,
                 null,
-                TagReader.ReachableTags(repository, head),
-                null);
+                tags,
+                null)
+            {
+                Notes = notes,
+            };
         }
     }
 
@@ -99,16 +108,7 @@ public sealed class GitSnapshotSource : ISnapshotSource
             throw new RepositoryInspectionException($"{full} does not exist or is not a folder.");
         }
 
-        string? gitDirectory;
-        try
-        {
-            gitDirectory = Repository.Discover(full);
-        }
-        catch (LibGit2SharpException e)
-        {
-            throw new RepositoryInspectionException($"{full} is not a git repository: {OneLine(e.Message)}", e);
-        }
-
+        var gitDirectory = RepositoryDiscovery.Find(full);
         if (gitDirectory is null)
         {
             throw new RepositoryInspectionException($"{full} is not a git repository (nor any of its parent folders).");
@@ -157,7 +157,11 @@ public sealed class GitSnapshotSource : ISnapshotSource
         }
         catch (LibGit2SharpException e)
         {
-            throw new RepositoryInspectionException($"Revision '{revision}' could not be resolved in {Location(repository)}: {OneLine(e.Message)}", e);
+            // An object that exists but cannot be parsed fails here too: say so rather than guess what it named.
+            throw new RepositoryInspectionException(
+                $"Revision '{revision}' could not be resolved in {Location(repository)}: {OneLine(e.Message)}"
+                + (e is NotFoundException or AmbiguousSpecificationException ? string.Empty : ". If it names an object of this repository, that object is damaged (git fsck names what is wrong)."),
+                e);
         }
 
         if (found is null)
@@ -165,13 +169,29 @@ public sealed class GitSnapshotSource : ISnapshotSource
             throw new RepositoryInspectionException($"Revision '{revision}' was not found in {Location(repository)}.");
         }
 
+        Commit commit;
         try
         {
-            return found.Peel<Commit>();
+            commit = found.Peel<Commit>();
         }
         catch (LibGit2SharpException e)
         {
-            throw new RepositoryInspectionException($"Revision '{revision}' names a {found.GetType().Name.ToLowerInvariant()}, not a commit.", e);
+            // A tree or blob cannot be peeled to a commit; an object that cannot be parsed is damaged, whatever it names.
+            throw found is Tree or Blob
+                ? new RepositoryInspectionException($"Revision '{revision}' names a {(found is Tree ? "tree" : "blob")}, not a commit.", e)
+                : new RepositoryInspectionException($"Revision '{revision}' ({found.Sha}) could not be read as a commit: {OneLine(e.Message)}. The repository is damaged (git fsck names what is wrong).", e);
+        }
+
+        try
+        {
+            // Reading the tree and the committer parses the commit object: a damaged one fails here, not later.
+            _ = commit.Tree.Sha;
+            _ = commit.Committer.When;
+            return commit;
+        }
+        catch (LibGit2SharpException e)
+        {
+            throw new RepositoryInspectionException($"Commit {commit.Sha} (revision '{revision}') could not be read: {OneLine(e.Message)}. The repository is damaged (git fsck names what is wrong).", e);
         }
     }
 
@@ -182,15 +202,26 @@ public sealed class GitSnapshotSource : ISnapshotSource
             var named = FindTag(repository, request.Tag.Trim());
             return named is null
                 ? throw new RepositoryInspectionException($"Tag '{request.Tag.Trim()}' was not found in {Location(repository)}.")
-                : TagReader.Read(named)
-                  ?? throw new RepositoryInspectionException($"Tag '{request.Tag.Trim()}' does not point at a commit.");
+                : ReadTag(named) ?? throw new RepositoryInspectionException($"Tag '{request.Tag.Trim()}' does not point at a commit.");
         }
 
         // The ref names a tag itself (git's rev-parse order looks in refs/tags/ before refs/heads/).
         var byRef = request.Ref.StartsWith("refs/tags/", StringComparison.Ordinal) || !request.Ref.StartsWith("refs/", StringComparison.Ordinal)
             ? FindTag(repository, request.Ref)
             : null;
-        return byRef is null ? null : TagReader.Read(byRef);
+        return byRef is null ? null : ReadTag(byRef);
+    }
+
+    private static TagInfo? ReadTag(Tag tag)
+    {
+        try
+        {
+            return TagReader.Read(tag);
+        }
+        catch (LibGit2SharpException e)
+        {
+            throw new RepositoryInspectionException($"Tag '{tag.FriendlyName}' could not be read: {OneLine(e.Message)}. The repository is damaged (git fsck names what is wrong).", e);
+        }
     }
 
     private static Tag? FindTag(Repository repository, string name)
@@ -206,19 +237,8 @@ public sealed class GitSnapshotSource : ISnapshotSource
         }
     }
 
-    private static SignatureBlock? CommitSignature(Repository repository, Commit commit)
-    {
-        try
-        {
-            var info = Commit.ExtractSignature(repository, commit.Id);
-            return SignatureBlock.FromArmored(info.Signature);
-        }
-        catch (NotFoundException)
-        {
-            // libgit2 reports an unsigned commit as "not found".
-            return null;
-        }
-    }
+    private static SignatureBlock? CommitSignature(Repository repository, Commit commit) =>
+        CommitSignatureReader.Read(Path.TrimEndingDirectorySeparator(repository.Info.Path), commit.Sha);
 
     internal static string OneLine(string message) =>
         string.Join(' ', message.Split(['\r', '\n'], StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));

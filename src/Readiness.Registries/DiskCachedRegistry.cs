@@ -1,6 +1,7 @@
 using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
+using System.Text.Json.Serialization;
 
 using Readiness.Core.Registry;
 
@@ -11,10 +12,9 @@ namespace Readiness.Registries;
 /// both), so a second run within the time to live asks no feed. Only complete answers are kept; a problem is always
 /// asked again. A cache that cannot be read or written is ignored: the feed is asked instead.
 /// </summary>
-public sealed class DiskCachedRegistry : IPackageRegistry, IDisposable
+public sealed partial class DiskCachedRegistry : IPackageRegistry, IDisposable
 {
     private const long MaxEntryBytes = 4L * 1024 * 1024;
-    private static readonly JsonSerializerOptions Json = new() { WriteIndented = false };
 
     private readonly IPackageRegistry inner;
     private readonly string folder;
@@ -74,7 +74,7 @@ public sealed class DiskCachedRegistry : IPackageRegistry, IDisposable
             }
 
             await using var stream = File.OpenRead(path);
-            var entry = await JsonSerializer.DeserializeAsync<Entry>(stream, Json, cancellationToken).ConfigureAwait(false);
+            var entry = await JsonSerializer.DeserializeAsync(stream, CacheJson.Default.Entry, cancellationToken).ConfigureAwait(false);
             var age = time.GetUtcNow() - entry?.StoredAt;
             if (entry is null || age is null || age < TimeSpan.Zero || age >= timeToLive
                 || entry.Source != inner.Source || !string.Equals(entry.Id, packageId, StringComparison.OrdinalIgnoreCase)
@@ -112,7 +112,7 @@ public sealed class DiskCachedRegistry : IPackageRegistry, IDisposable
             CreateFolder();
             await using (var stream = new FileStream(temporary, FileMode.CreateNew, FileAccess.Write, FileShare.None))
             {
-                await JsonSerializer.SerializeAsync(stream, entry, Json, cancellationToken).ConfigureAwait(false);
+                await JsonSerializer.SerializeAsync(stream, entry, CacheJson.Default.Entry, cancellationToken).ConfigureAwait(false);
             }
 
             File.Move(temporary, path, overwrite: true);
@@ -158,4 +158,8 @@ public sealed class DiskCachedRegistry : IPackageRegistry, IDisposable
         IReadOnlyList<string>? Owners);
 
     private sealed record EntryVersion(string Version, bool? Listed, bool? Deprecated);
+
+    /// <summary>Source-generated serialization of the cache entries (no reflection: the program is trimmed).</summary>
+    [JsonSerializable(typeof(Entry))]
+    private sealed partial class CacheJson : JsonSerializerContext;
 }

@@ -4,30 +4,40 @@ using System.Text;
 namespace Readiness.Rendering;
 
 /// <summary>The page's only style sheet, inline, and the Content-Security-Policy that allows exactly it.</summary>
-internal static class HtmlPageStyle
+public static class HtmlPageStyle
 {
+    /// <summary>
+    /// Readiness's own look (DEVELOPERS.md, "Look"): warm paper and ink, a slate-teal link; a serif for headings,
+    /// the system sans for text, monospace for ids and places. Every text colour meets
+    /// WCAG 2.2 AA (4.5:1) on both backgrounds in both schemes (HtmlPageStyleTests computes the ratios).
+    /// </summary>
     public const string Css = """
 
-:root { color-scheme: light dark; --fg: #1f2328; --bg: #ffffff; --muted: #59636e; --line: #d1d9e0; --head: #f6f8fa; --link: #0969da; }
+:root { color-scheme: light dark; --ink: #24211d; --paper: #fbf9f4; --quiet: #5e574d; --rule: #d8d0c2; --band: #f2ede3;
+  --link: #1d5a73; }
 @media (prefers-color-scheme: dark) {
-  :root { --fg: #e6edf3; --bg: #0d1117; --muted: #9198a1; --line: #3d444d; --head: #151b23; --link: #4493f8; }
+  :root { --ink: #ebe5da; --paper: #1a1a1c; --quiet: #ada597; --rule: #45423c; --band: #25252a;
+    --link: #84c4dc; }
 }
 * { box-sizing: border-box; }
-body { margin: 0; background: var(--bg); color: var(--fg); font: 15px/1.5 system-ui, -apple-system, "Segoe UI", sans-serif; }
-main { max-width: 72rem; margin: 0 auto; padding: 1.5rem; }
-h2 { font-size: 1.6rem; margin: 0 0 .5rem; }
-h3 { font-size: 1.15rem; margin: 1.75rem 0 .5rem; padding-top: .75rem; border-top: 1px solid var(--line); }
-a { color: var(--link); }
+body { margin: 0; background: var(--paper); color: var(--ink); font: 15px/1.55 ui-sans-serif, system-ui, "Noto Sans", sans-serif; }
+main { max-width: 70rem; margin: 0 auto; padding: 1.75rem 1.25rem; }
+h2, h3 { font-family: Charter, "Bitstream Charter", "Sitka Text", Cambria, Georgia, serif; font-weight: 700; letter-spacing: .01em; }
+h2 { font-size: 1.75rem; margin: 0 0 .4rem; padding-bottom: .3rem; border-bottom: 3px double var(--rule); }
+h3 { font-size: 1.15rem; margin: 2rem 0 .5rem; padding-left: .6rem; border-left: 4px solid var(--rule); }
+a { color: var(--link); text-underline-offset: .15em; }
+code { font: .9em ui-monospace, "DejaVu Sans Mono", Menlo, monospace; }
 table { border-collapse: collapse; width: 100%; margin: 1rem 0; font-size: .92rem; }
-th, td { border: 1px solid var(--line); padding: .35rem .6rem; text-align: left; vertical-align: top; }
+th, td { border-bottom: 1px solid var(--rule); padding: .4rem .6rem; text-align: left; vertical-align: top; }
+th { border-bottom: 2px solid var(--ink); font-weight: 600; }
 td:nth-child(-n+2) { white-space: nowrap; }
 td:nth-child(n+5) { overflow-wrap: anywhere; }
-th { background: var(--head); }
-tr:nth-child(even) td { background: var(--head); }
+td:nth-child(3), td:nth-child(6) { font-family: ui-monospace, "DejaVu Sans Mono", Menlo, monospace; font-size: .85rem; }
+tbody tr:nth-child(odd) td { background: var(--band); }
 ul { padding-left: 1.5rem; }
 .contains-task-list { list-style: none; padding-left: .5rem; }
-hr { border: 0; border-top: 1px solid var(--line); margin: 2rem 0 1rem; }
-hr + p { color: var(--muted); font-size: .85rem; }
+hr { border: 0; border-top: 1px solid var(--rule); margin: 2rem 0 1rem; }
+hr + p { color: var(--quiet); font-size: .85rem; }
 
 """;
 

@@ -54,10 +54,7 @@ public static class ServiceApp
         services.AddSingleton(sp => ServiceSettings.Load(
             sp.GetRequiredService<IConfiguration>(), sp.GetRequiredService<IHostEnvironment>().ContentRootPath));
         services.AddSingleton<SecretRedactor>();
-        services.AddSingleton(sp => new Database(sp.GetRequiredService<ServiceSettings>().DatabasePath));
-        services.AddSingleton(sp => new JobStore(
-            sp.GetRequiredService<Database>(), sp.GetRequiredService<TimeProvider>(), sp.GetRequiredService<ServiceSettings>().Quiet));
-        services.AddSingleton<RunStore>();
+        AddStores(services);
         services.AddSingleton<JobSignal>();
 
         services.AddSingleton<OctokitConnections>();
@@ -65,7 +62,8 @@ public static class ServiceApp
         {
             var s = sp.GetRequiredService<ServiceSettings>();
             return new ForgeRetryPolicy(s.ForgeMaxRetries, s.ForgeMaxRetryDelay, sp.GetRequiredService<TimeProvider>(),
-                sp.GetService<ILogger<ForgeRetryPolicy>>() ?? NullLogger<ForgeRetryPolicy>.Instance);
+                sp.GetService<ILogger<ForgeRetryPolicy>>() ?? NullLogger<ForgeRetryPolicy>.Instance,
+                sp.GetRequiredService<IForgeLimitStore>(), s.ForgeCallTimeout);
         });
         services.AddSingleton<IForgeCredentials>(sp =>
         {
@@ -75,7 +73,7 @@ public static class ServiceApp
                 : ActivatorUtilities.CreateInstance<AppInstallationCredentials>(sp);
         });
         services.AddSingleton<IForge, OctokitForge>();
-        services.AddSingleton(sp => new MirrorStore(sp.GetRequiredService<ServiceSettings>().MirrorFolder));
+        services.AddSingleton(sp => new MirrorStore(sp.GetRequiredService<ServiceSettings>().MirrorFolder, sp.GetRequiredService<ServiceSettings>().CloneHost));
 
         services.AddSingleton<BuiltInChecklists>();
         services.AddSingleton<IChecklistSource>(sp =>
@@ -94,12 +92,43 @@ public static class ServiceApp
         services.AddSingleton(_ => new ReportDocuments([new MarkdownRenderer(), new JsonRenderer(), new HtmlRenderer()], JsonReportReader.Parse));
         services.AddSingleton<PullRequestJobProcessor>();
         services.AddHostedService<JobWorker>();
+        services.AddHostedService<RetentionService>();
 
         services.AddSingleton<WebhookEndpoint>();
         services.AddSingleton<HomePage>();
         services.AddSingleton<RunPages>();
         services.AddSingleton<ChecklistEndpoints>();
         services.AddSingleton<RunsApi>();
+        services.AddSingleton<HealthEndpoints>();
+    }
+
+    /// <summary>
+    /// The stores the settings choose: PostgreSQL when <c>Readiness:PostgresConnection</c> is set, else the SQLite
+    /// file. Both implement <see cref="IJobStore"/> and <see cref="IRunStore"/>; nothing else knows which it has.
+    /// </summary>
+    private static void AddStores(IServiceCollection services)
+    {
+        services.AddSingleton(sp => new SqliteDatabase(sp.GetRequiredService<ServiceSettings>().DatabasePath));
+        services.AddSingleton(sp => new PostgresDatabase(sp.GetRequiredService<ServiceSettings>().PostgresConnection
+            ?? throw new InvalidOperationException("no PostgreSQL connection string is configured")));
+        services.AddSingleton<IJobStore>(sp =>
+        {
+            var s = sp.GetRequiredService<ServiceSettings>();
+            var time = sp.GetRequiredService<TimeProvider>();
+            return s.PostgresConnection is null
+                ? new SqliteJobStore(sp.GetRequiredService<SqliteDatabase>(), time, s.JobOptions)
+                : new PostgresJobStore(sp.GetRequiredService<PostgresDatabase>(), time, s.JobOptions);
+        });
+        services.AddSingleton<IForgeLimitStore>(sp => sp.GetRequiredService<ServiceSettings>().PostgresConnection is null
+            ? new SqliteForgeLimitStore(sp.GetRequiredService<SqliteDatabase>())
+            : new PostgresForgeLimitStore(sp.GetRequiredService<PostgresDatabase>()));
+        services.AddSingleton<IRunStore>(sp =>
+        {
+            var time = sp.GetRequiredService<TimeProvider>();
+            return sp.GetRequiredService<ServiceSettings>().PostgresConnection is null
+                ? new SqliteRunStore(sp.GetRequiredService<SqliteDatabase>(), time)
+                : new PostgresRunStore(sp.GetRequiredService<PostgresDatabase>(), time);
+        });
     }
 
     public static void MapEndpoints(WebApplication app)
@@ -113,6 +142,8 @@ public static class ServiceApp
         app.MapGet("/api/checklists", (HttpRequest r, ChecklistEndpoints e) => e.List(r));
         app.MapGet("/api/checklists/{name}", (string name, ChecklistEndpoints e) => e.Get(name));
         app.MapPost("/api/runs", (HttpContext c, RunsApi a) => a.PostAsync(c));
-        app.MapGet("/healthz", (JobStore jobs) => Results.Json(new { status = "ok", jobs = jobs.CountByState() }, ServiceJson.Options));
+        app.MapGet("/healthz", (HealthEndpoints h) => h.Live());
+        app.MapGet("/readyz", (HealthEndpoints h) => h.Ready());
+        app.MapFallback((HttpContext c) => NotFoundPage.Render(c));
     }
 }

@@ -76,8 +76,8 @@ public sealed class ServiceBench : IBench
         });
         await app.StartAsync(cancellationToken);
         var url = app.Urls.First();
-        var jobs = app.Services.GetRequiredService<JobStore>();
-        var runs = app.Services.GetRequiredService<RunStore>();
+        var jobs = app.Services.GetRequiredService<IJobStore>();
+        var runs = app.Services.GetRequiredService<IRunStore>();
 
         using var handler = new SocketsHttpHandler { MaxConnectionsPerServer = senders, PooledConnectionLifetime = TimeSpan.FromMinutes(5) };
         using var client = new HttpClient(handler) { BaseAddress = new Uri(url) };
@@ -155,7 +155,7 @@ public sealed class ServiceBench : IBench
         Console.WriteLine(ok ? "verdict              no delivery lost or duplicated" : "verdict              PROBLEM: see the figures above");
     }
 
-    private static async Task DrainAsync(JobStore jobs, CancellationToken cancellationToken)
+    private static async Task DrainAsync(IJobStore jobs, CancellationToken cancellationToken)
     {
         while (true)
         {

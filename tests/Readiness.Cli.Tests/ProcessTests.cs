@@ -6,7 +6,7 @@ namespace Readiness.Cli.Tests;
 /// <summary>The built program as a separate process: exit codes and the redirected-output default format.</summary>
 public sealed class ProcessTests
 {
-    public static string Program => Path.Combine(AppContext.BaseDirectory, OperatingSystem.IsWindows() ? "readiness.exe" : "readiness");
+    public static string Program => CliHarness.Program;
 
     public static (int Exit, string Out, string Error) Run(string directory, params string[] args) => RunProgram(Program, directory, args);
 
@@ -45,14 +45,18 @@ public sealed class ProcessTests
     }
 
     [Fact]
-    public void Check_AsAProcess_WritesMarkdownWhenRedirected_AndExitsOneWhenNotReady()
+    public void Check_AsAProcess_WritesPlainTextWhenRedirected_AndExitsOneWhenNotReady()
     {
         using var repo = SampleLibrary.ReadyRelease("1.2.0");
         repo.Delete("CHANGELOG.md").Commit("Drop the changelog");
         repo.AnnotatedTag("v1.2.1", "1.2.1\n");
         var (exit, output, _) = Run(repo.Path, "check", "--offline", "--version", "1.2.1");
         Assert.Equal(1, exit);
-        Assert.StartsWith("<!-- readiness-report -->", output, StringComparison.Ordinal);
+        // Piped output (a CI log) is plain text: no Markdown marker, no terminal escapes, the verdict first and last.
+        Assert.StartsWith("NOT READY  ", output, StringComparison.Ordinal);
+        Assert.DoesNotContain("<!-- readiness-report -->", output, StringComparison.Ordinal);
+        Assert.DoesNotContain('\u001b', output);
+        Assert.StartsWith("NOT READY: 1.2.1 — ", output.TrimEnd('\n').Split('\n')[^1], StringComparison.Ordinal);
         Assert.Contains("changelog.present", output, StringComparison.Ordinal);
     }
 

@@ -26,12 +26,14 @@ public sealed class CommitFileTreeTests
 
         using var snapshot = source.Open(new SnapshotRequest(repo.Path, sha));
 
-        // git ls-tree -r --name-only is the reference listing of a commit's files (git-ls-tree(1));
-        // -z avoids git's quoting of unusual names. Our order is ordinal, so git's list is sorted the same way.
-        var expected = repo.Git("ls-tree", "-r", "-z", "--name-only", sha).Split('\0', StringSplitOptions.RemoveEmptyEntries)
-            .Order(StringComparer.Ordinal).ToArray();
+        // git ls-tree -r is the reference listing of a commit's entries (git-ls-tree(1)); -z avoids git's quoting of
+        // unusual names. Mode 120000 is a symbolic link: listed apart, never read as a file. Our order is ordinal.
+        var entries = repo.Git("ls-tree", "-r", "-z", sha).Split('\0', StringSplitOptions.RemoveEmptyEntries)
+            .Select(e => (Mode: e[..6], Path: e[(e.IndexOf('\t', StringComparison.Ordinal) + 1)..])).ToList();
+        var expected = entries.Where(e => e.Mode != "120000").Select(e => e.Path).Order(StringComparer.Ordinal).ToArray();
         Assert.Equal(expected, snapshot.Files.Paths);
-        Assert.Equal(10, snapshot.Files.Paths.Count);
+        Assert.Equal(9, snapshot.Files.Paths.Count);
+        Assert.Equal(entries.Where(e => e.Mode == "120000").Select(e => e.Path), snapshot.Files.Unread.Select(u => u.Path));
     }
 
     [Fact]

@@ -149,7 +149,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         ArgumentNullException.ThrowIfNull(report);
         ArgumentNullException.ThrowIfNull(outputs);
         var catalog = Renderers();
-        var targets = ReportTargets.Plan(format, outputs, catalog.Formats, console.IsTerminal ? "text" : "markdown");
+        var targets = ReportTargets.Plan(format, outputs, catalog.Formats, "text");
         var written = new List<string>();
         foreach (var target in targets)
         {
@@ -189,8 +189,6 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
     public static string Summary(Report report)
     {
         ArgumentNullException.ThrowIfNull(report);
-        var s = report.Summary;
-        var verdict = report.Ready ? "READY" : "NOT READY";
-        return $"{verdict}: {report.Subject.Version ?? "(no version)"} — {s.Pass} pass, {s.Fail} fail, {s.Skip} skip, {s.Manual} manual, {s.Error} error; {s.Blocking} blocking.";
+        return ReportWording.Sentence(report) + ".";
     }
 }

@@ -3,6 +3,7 @@ namespace Readiness.Core.Checks;
 /// <summary>Every check id of the catalog (checks.md), in one place. Ids are stable: never rename one.</summary>
 public static class CheckIds
 {
+    public const string BuildReadable = "build.readable";
     public const string VersionWellFormed = "version.well-formed";
     public const string VersionMatchesTag = "version.matches-tag";
     public const string VersionConsistent = "version.consistent";

@@ -5,6 +5,7 @@ namespace Readiness.Core.Checks;
 /// <summary>The published standards checks cite (standards.md), one instance each.</summary>
 public static class Standards
 {
+    public static readonly StandardReference MsBuildProjectFiles = new("MSBuild project file schema (XML 1.0)", "https://learn.microsoft.com/visualstudio/msbuild/msbuild-project-file-schema-reference");
     public static readonly StandardReference SemVer = new("Semantic Versioning 2.0.0", "https://semver.org/spec/v2.0.0.html");
     public static readonly StandardReference NuGetVersioning = new("NuGet package versioning", "https://learn.microsoft.com/nuget/concepts/package-versioning");
     public static readonly StandardReference KeepAChangelog = new("Keep a Changelog 1.1.0", "https://keepachangelog.com/en/1.1.0/");

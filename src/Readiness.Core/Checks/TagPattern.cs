@@ -42,8 +42,16 @@ public sealed record TagPattern(string Pattern)
         }
 
         var version = tagName[prefix.Length..(tagName.Length - suffix.Length)];
-        return char.IsAsciiDigit(version[0]) ? (id, version) : null;
+        return IsReleaseVersion(version) ? (id, version) : null;
     }
+
+    /// <summary>
+    /// A version a release carries: at least MAJOR.MINOR, as NuGet parses it (SemVer 2.0.0 §2, with NuGet's
+    /// four-part form). A bare build number such as <c>1234</c> or a word is not a release.
+    /// </summary>
+    public static bool IsReleaseVersion(string version) =>
+        version.Length > 0 && char.IsAsciiDigit(version[0]) && version.Split('-', '+')[0].Contains('.', StringComparison.Ordinal)
+        && NuGet.Versioning.NuGetVersion.TryParse(version, out _);
 
     public string Format(string version, string? id = null) =>
         Pattern.Replace("{version}", version, StringComparison.Ordinal).Replace("{id}", id ?? string.Empty, StringComparison.Ordinal);

@@ -31,12 +31,8 @@ public sealed class CheckCatalog
 
     public IReadOnlyDictionary<string, Severity> DefaultSeverities { get; }
 
-    /// <summary>Every sealed <see cref="ICheck"/> with a public parameterless constructor in Core.</summary>
-    public static CheckCatalog BuiltIn() =>
-        new(typeof(ICheck).Assembly.GetTypes()
-            .Where(t => t is { IsClass: true, IsAbstract: false, IsSealed: true } && typeof(ICheck).IsAssignableFrom(t)
-                && t.GetConstructor(Type.EmptyTypes) is not null)
-            .Select(t => (ICheck)Activator.CreateInstance(t)!));
+    /// <summary>The built-in checks (<see cref="BuiltInChecks"/>).</summary>
+    public static CheckCatalog BuiltIn() => new(BuiltInChecks.Create());
 
     public ICheck? Find(string id) => byId.GetValueOrDefault(id);
 }

@@ -88,7 +88,10 @@ public sealed class ChecklistEngine(CheckCatalog catalog, TimeProvider time)
 
         if (findings.Count == 0)
         {
-            findings.Add(Finding.Skip("Nothing to check: no subject this check applies to."));
+            var unreadable = input.Projects.Problems.Count(p => p.Kind == Projects.ProjectProblemKind.Unreadable);
+            findings.Add(Finding.Skip(unreadable > 0
+                ? $"Nothing to check among the projects that were read: {unreadable} project file(s) could not be read ({CheckIds.BuildReadable} names them)."
+                : "Nothing to check: no subject this check applies to."));
         }
 
         return findings.Select(f => new CheckResult(

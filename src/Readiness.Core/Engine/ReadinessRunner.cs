@@ -46,7 +46,16 @@ public sealed class ReadinessRunner(
                 : resolver.Load(request.ChecklistName ?? config.Checklist ?? DefaultChecklist,
                     config.Checklist is not null && request.ChecklistName is null ? config.Values["checklist"].Mark : null));
         var checklist = resolver.Resolve(definition, config);
-        var model = projectReader.Read(snapshot.Files);
+        var packs = PackCommands.Read(snapshot.Files);
+        var model = PackageSelection.Apply(projectReader.Read(snapshot.Files), packs, config);
+        var projectsRequired = !config.Values.TryGetValue(BuildInventory.ProjectsRequiredKey, out var required)
+            || required.AsBool(BuildInventory.ProjectsRequiredKey);
+        if (model.Projects.Count == 0 && projectsRequired)
+        {
+            // No build the tool understands: never a verdict without grounds (exit 3, "could not inspect").
+            throw new RepositoryInspectionException(BuildInventory.Describe(snapshot.Files, model));
+        }
+
         var now = time.GetUtcNow();
         var release = ReleaseFactsBuilder.Build(snapshot, model, config, request.Version, now);
 
@@ -73,7 +82,18 @@ public sealed class ReadinessRunner(
         var notes = new List<string>();
         notes.AddRange(checklist.Checks.Where(c => engine.Catalog.Find(c.Id) is null)
             .Select(c => $"{c.Id} is in the checklist but this version of the tool does not implement it yet; it did not run."));
-        notes.AddRange(model.Problems.Select(p => p.Line is { } line ? $"{p.Path}:{line}: {p.Message}" : $"{p.Path}: {p.Message}"));
+        notes.AddRange(snapshot.Notes);
+        notes.AddRange(snapshot.Files.Unread.Select(u => u.ToString()));
+        // Unreadable project files are build.readable's errors when the checklist runs it, notes otherwise.
+        var readableRuns = checklist.Checks.Any(c => c.Id == Checks.CheckIds.BuildReadable);
+        notes.AddRange(model.Problems.Where(p => !readableRuns || p.Kind != ProjectProblemKind.Unreadable).Select(p => p.ToString()));
+        if (model.Projects.Count == 0)
+        {
+            notes.Add($"No .NET project was read; {BuildInventory.ProjectsRequiredKey}: false in {RepositoryConfig.FileName} allows that.");
+        }
+
+        notes.Add($"Release tags: {release.TagPatternSource}.");
+        notes.AddRange(PackageSelection.Describe(model));
         notes.Add($"Version {release.Version ?? "(unknown)"} taken from {release.VersionSource}.");
         var input = new EngineInput(
             snapshot,
@@ -91,7 +111,16 @@ public sealed class ReadinessRunner(
     public RepositoryConfig ReadConfig(IFileTree files)
     {
         ArgumentNullException.ThrowIfNull(files);
-        var text = files.ReadText(RepositoryConfig.FileName, YamlReader.MaxChars);
+        string? text;
+        try
+        {
+            text = files.ReadText(RepositoryConfig.FileName, YamlReader.MaxChars);
+        }
+        catch (FileTooLargeException e)
+        {
+            throw new ConfigurationException(new ConfigMark(RepositoryConfig.FileName, 1, 1), $"the file is {e.Size:N0} bytes, above the {e.Limit:N0}-byte limit; it was not read");
+        }
+
         return text is null ? RepositoryConfig.Empty : new RepositoryConfigParser(Parser).Parse(RepositoryConfig.FileName, text);
     }
 

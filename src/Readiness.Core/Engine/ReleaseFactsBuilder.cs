@@ -16,7 +16,9 @@ public static class ReleaseFactsBuilder
         ArgumentNullException.ThrowIfNull(snapshot);
         ArgumentNullException.ThrowIfNull(projects);
         ArgumentNullException.ThrowIfNull(config);
-        var pattern = new TagPattern(config.TagPattern);
+        var (pattern, patternSource) = config.Values.ContainsKey("tag-pattern") || config.TagPattern != RepositoryConfig.DefaultTagPattern
+            ? (new TagPattern(config.TagPattern), $"tag pattern {config.TagPattern}: from tag-pattern in {RepositoryConfig.FileName}")
+            : TagPatternInference.Infer(snapshot, projects);
         var tag = snapshot.Tag ?? FindReleaseTag(snapshot, pattern);
         var tagVersion = tag is null ? null : pattern.Match(tag.Name)?.Version;
 
@@ -25,7 +27,7 @@ public static class ReleaseFactsBuilder
         if (!string.IsNullOrWhiteSpace(versionOverride))
         {
             version = versionOverride.Trim();
-            source = "--version";
+            source = ReleaseFacts.VersionOptionSource;
         }
         else if (tagVersion is not null)
         {
@@ -41,7 +43,7 @@ public static class ReleaseFactsBuilder
         }
 
         var date = tag?.TaggerDate ?? (tag is not null ? snapshot.CommitDate : now);
-        return new ReleaseFacts(tag, tagVersion, version, source, date, pattern);
+        return new ReleaseFacts(tag, tagVersion, version, source, date, pattern, patternSource);
     }
 
     /// <summary>Among tags at the inspected commit that match the pattern, the one with the highest version.</summary>

@@ -11,6 +11,15 @@ namespace Readiness.Core.Licensing;
 /// </summary>
 public static partial class SpdxExpressionParser
 {
+    /// <summary>
+    /// Most tokens read: real expressions hold a handful of terms (the SPDX list's longest ids are under 50
+    /// characters); a longer one is refused with a clear error, so no later walk of the tree can be deep.
+    /// </summary>
+    public const int MaxTokens = 512;
+
+    /// <summary>Deepest parenthesis nesting accepted.</summary>
+    public const int MaxDepth = 32;
+
     [GeneratedRegex(@"^[A-Za-z0-9.\-]+$", RegexOptions.CultureInvariant)]
     private static partial Regex IdString();
 
@@ -40,6 +49,12 @@ public static partial class SpdxExpressionParser
         if (tokens.Count == 0)
         {
             error = "the expression is empty";
+            return false;
+        }
+
+        if (tokens.Count > MaxTokens)
+        {
+            error = $"the expression has more than {MaxTokens} terms, operators and parentheses; not read";
             return false;
         }
 
@@ -109,6 +124,7 @@ public static partial class SpdxExpressionParser
     private sealed class Reader(List<string> tokens)
     {
         private int position;
+        private int depth;
 
         public bool AtEnd => position >= tokens.Count;
 
@@ -144,8 +160,15 @@ public static partial class SpdxExpressionParser
         {
             if (Peek == "(")
             {
+                if (++depth > MaxDepth)
+                {
+                    error = $"parentheses nested deeper than {MaxDepth} levels";
+                    return null;
+                }
+
                 position++;
                 var inner = ParseOr(out error);
+                depth--;
                 if (inner is null || error is not null)
                 {
                     return null;

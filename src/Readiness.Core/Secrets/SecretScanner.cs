@@ -5,7 +5,9 @@ namespace Readiness.Core.Secrets;
 /// <summary>
 /// Scans every tracked file for credentials: key files by name and format, then text files (no NUL byte in the
 /// first 8,000 bytes, git's own binary test in xdiff-interface.c) for the <see cref="SecretShapes"/>, and
-/// nuget.config files for stored credentials. Files above <see cref="FileLimits.ScanMaxBytes"/> are listed, not read.
+/// nuget.config files for stored credentials. Text in UTF-16 without a byte-order mark is recognised by its NUL
+/// pattern and scanned. Files above <see cref="FileLimits.ScanMaxBytes"/> are listed, not read: the check then
+/// cannot pass.
 /// </summary>
 public static class SecretScanner
 {
@@ -28,26 +30,30 @@ public static class SecretScanner
                 continue;
             }
 
-            if (size > maxBytes)
+            // Each file is read whole, one at a time, so that a secret cannot hide in a file merely for its size; only
+            // beyond the bound is a file listed as not scanned.
+            var limit = maxBytes;
+            if (size > limit)
             {
                 tooLarge.Add(path);
                 continue;
             }
 
-            var bytes = files.ReadBytes(path, maxBytes);
+            var bytes = files.ReadBytes(path, limit);
             if (bytes is null)
             {
                 continue;
             }
 
-            if (IsBinary(bytes))
+            var utf16 = Utf16WithoutMark(bytes);
+            if (utf16 is null && IsBinary(bytes))
             {
                 binary++;
                 continue;
             }
 
             text++;
-            var content = FileTreeExtensions.Decode(bytes);
+            var content = utf16 is null ? FileTreeExtensions.Decode(bytes) : utf16.GetString(bytes);
             hits.AddRange(ScanText(path, content));
             if (NuGetConfigCredentials.IsNuGetConfig(path))
             {
@@ -62,6 +68,41 @@ public static class SecretScanner
     public static bool IsBinary(ReadOnlySpan<byte> bytes) =>
         bytes[..Math.Min(bytes.Length, BinaryProbeBytes)].Contains((byte)0)
         && !(bytes.Length >= 2 && ((bytes[0] == 0xFF && bytes[1] == 0xFE) || (bytes[0] == 0xFE && bytes[1] == 0xFF)));
+
+    /// <summary>
+    /// UTF-16 text without a byte-order mark, told from binary as the Unicode standard's guidance for unmarked UTF-16
+    /// suggests (Unicode 15.0 §3.10, D98): mostly-ASCII text has a NUL in every second byte, on one side only.
+    /// Returns the encoding (little- or big-endian), or null when the probe does not look like that.
+    /// </summary>
+    public static System.Text.Encoding? Utf16WithoutMark(ReadOnlySpan<byte> bytes)
+    {
+        var probe = bytes[..Math.Min(bytes.Length, BinaryProbeBytes)];
+        if (probe.Length < 4 || probe.Length % 2 != 0 || !probe.Contains((byte)0))
+        {
+            return null;
+        }
+
+        int evenNul = 0, oddNul = 0;
+        for (var i = 0; i < probe.Length; i++)
+        {
+            if (probe[i] == 0)
+            {
+                if (i % 2 == 0)
+                {
+                    evenNul++;
+                }
+                else
+                {
+                    oddNul++;
+                }
+            }
+        }
+
+        var half = probe.Length / 2;
+        return oddNul * 10 >= half * 9 && evenNul == 0 ? System.Text.Encoding.Unicode
+            : evenNul * 10 >= half * 9 && oddNul == 0 ? System.Text.Encoding.BigEndianUnicode
+            : null;
+    }
 
     /// <summary>Every shape match in one text, with its line; placeholders are left out.</summary>
     public static IEnumerable<SecretHit> ScanText(string path, string content)

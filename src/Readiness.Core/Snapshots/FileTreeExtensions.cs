@@ -16,7 +16,9 @@ public static class FileTreeExtensions
 
     public static string Decode(ReadOnlySpan<byte> bytes)
     {
-        if (bytes.StartsWith("\xEF\xBB\xBF"u8))
+        // The UTF-8 byte-order mark EF BB BF (Unicode 15.0 §23.8). Not written as "\xEF\xBB\xBF"u8: in a C# string
+        // \xEF is the character U+00EF, which a u8 literal encodes as two bytes.
+        if (bytes.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]))
         {
             return Encoding.UTF8.GetString(bytes[3..]);
         }

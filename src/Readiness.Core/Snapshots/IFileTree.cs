@@ -9,6 +9,12 @@ public interface IFileTree
     /// <summary>Every file path (blobs only; no folders, no submodules), sorted ordinally.</summary>
     IReadOnlyList<string> Paths { get; }
 
+    /// <summary>
+    /// Entries that are in the tree but not listed in <see cref="Paths"/>: symbolic links (never followed),
+    /// submodules, folders nested deeper than <see cref="FileLimits.MaxFolderDepth"/>. Reports name each one.
+    /// </summary>
+    IReadOnlyList<UnreadEntry> Unread => [];
+
     bool Exists(string path);
 
     /// <summary>The file's size in bytes, or null when it does not exist.</summary>

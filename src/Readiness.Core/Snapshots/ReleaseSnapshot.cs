@@ -27,6 +27,9 @@ public sealed record ReleaseSnapshot(
     IReadOnlyList<TagInfo> Tags,
     ISignatureVerifier? Signatures = null) : IDisposable
 {
+    /// <summary>What the source could not read and left out (a broken tag, a symlink, a submodule), one line each.</summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+
     /// <summary>Releases the repository handle behind <see cref="Files"/>, if it holds one.</summary>
     public void Dispose() => (Files as IDisposable)?.Dispose();
 }

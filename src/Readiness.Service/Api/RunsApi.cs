@@ -8,7 +8,7 @@ using Readiness.Service.Worker;
 namespace Readiness.Service.Api;
 
 /// <summary><c>POST /api/runs</c>: hook clients record their results and waivers, with the configured bearer token.</summary>
-public sealed class RunsApi(ServiceSettings settings, RunStore runs, ReportDocuments documents, SecretRedactor redactor, ILogger<RunsApi> logger)
+public sealed class RunsApi(ServiceSettings settings, IRunStore runs, ReportDocuments documents, SecretRedactor redactor, ILogger<RunsApi> logger)
 {
     public const int MaxBodyBytes = 4 * 1024 * 1024;
     public const int MaxWaivers = 200;

@@ -14,6 +14,14 @@ public sealed class ServiceSettings
     /// <summary>The forge's API base URL.</summary>
     public required Uri ForgeApiUrl { get; init; }
 
+    /// <summary>
+    /// The only host clone URLs may name (<c>Readiness:Forge:CloneHost</c>; by default the API's host, without a
+    /// leading <c>api.</c>): the forge's token is offered to no other.
+    /// </summary>
+    public string CloneHost => ConfiguredCloneHost ?? (ForgeApiUrl.Host.StartsWith("api.", StringComparison.OrdinalIgnoreCase) ? ForgeApiUrl.Host[4..] : ForgeApiUrl.Host);
+
+    public string? ConfiguredCloneHost { get; init; }
+
     /// <summary>A plain token, for setups without an app.</summary>
     public string? ForgeToken { get; init; }
 
@@ -62,7 +70,28 @@ public sealed class ServiceSettings
     /// <summary>How long a queued job waits after its pull request's last event before it may run.</summary>
     public TimeSpan Quiet { get; init; } = TimeSpan.FromSeconds(1);
 
+    /// <summary>The longest a job waits for its pull request's events to stop, from the first one.</summary>
+    public TimeSpan MaxQuiet { get; init; } = TimeSpan.FromMinutes(1);
+
     public int MaxAttempts { get; init; } = 5;
+
+    /// <summary>Queued jobs one repository may hold; deliveries beyond it are answered 503.</summary>
+    public int MaxQueuedPerRepository { get; init; } = 1000;
+
+    /// <summary>Jobs of one repository running at once, across all instances.</summary>
+    public int MaxRunningPerRepository { get; init; } = 4;
+
+    /// <summary>How long deliveries and finished jobs are kept (runs, the history, are kept).</summary>
+    public TimeSpan Retention { get; init; } = TimeSpan.FromDays(30);
+
+    /// <summary>
+    /// A PostgreSQL connection string (<c>Readiness:PostgresConnection</c>): when set, deliveries, jobs and runs live
+    /// there and several instances may share them; when not, in the SQLite file in <see cref="DataFolder"/>.
+    /// </summary>
+    public string? PostgresConnection { get; init; }
+
+    /// <summary>The options the job store applies.</summary>
+    public Storage.JobStoreOptions JobOptions => new(Quiet, MaxQuiet, MaxAttempts, MaxQueuedPerRepository, MaxRunningPerRepository);
 
     public int ForgeMaxRetries { get; init; } = 4;
 
@@ -70,7 +99,13 @@ public sealed class ServiceSettings
 
     public TimeSpan JobRetryDelay { get; init; } = TimeSpan.FromSeconds(30);
 
+    /// <summary>How long one forge call may take before it is cancelled and retried.</summary>
+    public TimeSpan ForgeCallTimeout { get; init; } = TimeSpan.FromSeconds(15);
+
     public bool UsesApp => AppId is not null;
+
+    /// <summary>The password inside <see cref="PostgresConnection"/>, for redaction.</summary>
+    public string? PostgresPassword => PostgresConnection is { } cs ? new Npgsql.NpgsqlConnectionStringBuilder(cs).Password : null;
 
     public string DatabasePath => Path.Combine(DataFolder, "readiness.db");
 
@@ -78,7 +113,7 @@ public sealed class ServiceSettings
 
     /// <summary>Every secret value configured, for redaction.</summary>
     public IReadOnlyList<string> Secrets =>
-        new[] { ForgeToken, WebhookSecret, ApiToken, AppPrivateKeyPem }.OfType<string>().Where(s => s.Length > 0).ToArray();
+        new[] { ForgeToken, WebhookSecret, ApiToken, AppPrivateKeyPem, PostgresPassword }.OfType<string>().Where(s => s.Length > 0).ToArray();
 
     /// <summary>Reads and checks the <c>Readiness</c> section.</summary>
     public static ServiceSettings Load(IConfiguration configuration, string contentRoot)
@@ -163,6 +198,7 @@ public sealed class ServiceSettings
         {
             ForgeApiUrl = apiUrl,
             ForgeToken = token,
+            ConfiguredCloneHost = NullIfBlank(c["Forge:CloneHost"]),
             AppId = appId,
             AppPrivateKeyPem = pem,
             WebhookSecret = secret,
@@ -179,10 +215,36 @@ public sealed class ServiceSettings
             Poll = TimeSpan.FromMilliseconds(Int(c, "Worker:PollMilliseconds", 5000, 10, 600_000)),
             MaxAttempts = Int(c, "Worker:MaxAttempts", 5, 1, 100),
             Quiet = TimeSpan.FromMilliseconds(Int(c, "Worker:QuietMilliseconds", 1000, 0, 600_000)),
+            MaxQuiet = TimeSpan.FromMilliseconds(Int(c, "Worker:MaxQuietMilliseconds", 60_000, 0, 3_600_000)),
+            MaxQueuedPerRepository = Int(c, "Worker:MaxQueuedPerRepository", 1000, 1, 1_000_000),
+            MaxRunningPerRepository = Int(c, "Worker:MaxRunningPerRepository", 4, 1, 1000),
+            Retention = TimeSpan.FromDays(Int(c, "RetentionDays", 30, 1, 3650)),
+            PostgresConnection = ReadPostgresConnection(c, Key("PostgresConnection")),
             JobRetryDelay = TimeSpan.FromMilliseconds(Int(c, "Worker:RetryDelayMilliseconds", 30_000, 0, 3_600_000)),
             ForgeMaxRetries = Int(c, "Forge:MaxRetries", 4, 0, 20),
+            ForgeCallTimeout = TimeSpan.FromMilliseconds(Int(c, "Forge:CallTimeoutMilliseconds", 15_000, 50, 300_000)),
             ForgeMaxRetryDelay = TimeSpan.FromMilliseconds(Int(c, "Forge:MaxRetryDelayMilliseconds", 120_000, 0, 3_600_000)),
         };
+    }
+
+    private static string? ReadPostgresConnection(IConfigurationSection c, string key)
+    {
+        var text = NullIfBlank(c["PostgresConnection"]);
+        if (text is null)
+        {
+            return null;
+        }
+
+        try
+        {
+            _ = new Npgsql.NpgsqlConnectionStringBuilder(text);
+            return text;
+        }
+        catch (ArgumentException e)
+        {
+            // The message names the bad keyword, never the value (it may hold a password).
+            throw new ServiceConfigurationException(key, $"not a PostgreSQL connection string: {e.Message}");
+        }
     }
 
     /// <summary>The first listening address when it names a host, else the default one.</summary>

@@ -12,16 +12,33 @@ public sealed class StartupCheck(IServiceProvider services, ILogger<StartupCheck
         {
             Directory.CreateDirectory(settings.DataFolder);
             Directory.CreateDirectory(settings.MirrorFolder);
-            services.GetRequiredService<Database>().Initialize();
+            if (settings.PostgresConnection is null)
+            {
+                services.GetRequiredService<SqliteDatabase>().Initialize();
+            }
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or Microsoft.Data.Sqlite.SqliteException)
         {
             throw new ServiceConfigurationException($"{ServiceSettings.Section}:DataFolder", $"{settings.DataFolder} cannot hold the database: {e.Message}");
         }
 
+        if (settings.PostgresConnection is not null)
+        {
+            try
+            {
+                var applied = services.GetRequiredService<PostgresDatabase>().Initialize();
+                logger.LogInformation("PostgreSQL schema at version {Version} ({Applied} steps applied now)", PostgresDatabase.SchemaVersion, applied);
+            }
+            catch (Exception e) when (e is Npgsql.NpgsqlException or TimeoutException or System.Net.Sockets.SocketException)
+            {
+                throw new ServiceConfigurationException($"{ServiceSettings.Section}:PostgresConnection", $"the database cannot be reached or migrated: {e.Message}");
+            }
+        }
+
         logger.LogInformation(
-            "Readiness service: data in {DataFolder}, forge API {ApiUrl}, authenticating as {Mode}, release branches {Branches}",
+            "Readiness service: data in {DataFolder} ({Store}), forge API {ApiUrl}, authenticating as {Mode}, release branches {Branches}",
             settings.DataFolder,
+            settings.PostgresConnection is null ? "SQLite" : "PostgreSQL",
             settings.ForgeApiUrl,
             settings.UsesApp ? $"app {settings.AppId}" : "a token",
             string.Join(", ", settings.ReleaseBranches));

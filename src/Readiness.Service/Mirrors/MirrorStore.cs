@@ -8,7 +8,7 @@ namespace Readiness.Service.Mirrors;
 /// One bare mirror per repository under the data folder, fetched before each job (branches, tags and the forge's
 /// pull request heads). Nothing is checked out. One fetch per repository at a time.
 /// </summary>
-public sealed class MirrorStore(string folder)
+public sealed class MirrorStore(string folder, string tokenHost)
 {
     private static readonly string[] RefSpecs =
     [
@@ -34,7 +34,7 @@ public sealed class MirrorStore(string folder)
 
     /// <summary>
     /// Creates the mirror when missing and fetches it from <paramref name="cloneUrl"/>. <paramref name="token"/> is
-    /// offered only to HTTPS remotes. Throws <see cref="RepositoryInspectionException"/> when the fetch fails.
+    /// offered only to HTTPS remotes on <c>tokenHost</c> (<see cref="OffersToken"/>). Throws <see cref="RepositoryInspectionException"/> when the fetch fails.
     /// </summary>
     public async Task<string> UpdateAsync(string fullName, string cloneUrl, string? token, CancellationToken cancellationToken)
     {
@@ -44,7 +44,8 @@ public sealed class MirrorStore(string folder)
         await gate.WaitAsync(cancellationToken).ConfigureAwait(false);
         try
         {
-            return await Task.Run(() => Fetch(path, cloneUrl, token, cancellationToken), cancellationToken).ConfigureAwait(false);
+            var offered = OffersToken(cloneUrl, tokenHost) ? token : null;
+            return await Task.Run(() => Fetch(path, cloneUrl, offered, cancellationToken), cancellationToken).ConfigureAwait(false);
         }
         finally
         {
@@ -79,7 +80,7 @@ public sealed class MirrorStore(string folder)
                 TagFetchMode = TagFetchMode.None,
                 OnTransferProgress = _ => !cancellationToken.IsCancellationRequested,
             };
-            if (token is not null && cloneUrl.StartsWith("https://", StringComparison.OrdinalIgnoreCase))
+            if (token is not null)
             {
                 options.CredentialsProvider = (_, _, _) => new UsernamePasswordCredentials { Username = "x-access-token", Password = token };
             }
@@ -93,6 +94,13 @@ public sealed class MirrorStore(string folder)
             throw new RepositoryInspectionException($"could not fetch {Redact(cloneUrl)}: {e.Message}", e);
         }
     }
+
+    /// <summary>Whether the forge's token may go to <paramref name="cloneUrl"/>: https, on the forge's own host, no credentials of its own.</summary>
+    public static bool OffersToken(string cloneUrl, string tokenHost) =>
+        Uri.TryCreate(cloneUrl, UriKind.Absolute, out var uri)
+        && uri.Scheme == Uri.UriSchemeHttps
+        && uri.UserInfo.Length == 0
+        && string.Equals(uri.Host, tokenHost, StringComparison.OrdinalIgnoreCase);
 
     /// <summary>A clone URL without any user information it may carry.</summary>
     public static string Redact(string url) =>

@@ -5,7 +5,7 @@ using Readiness.Service.Storage;
 namespace Readiness.Service.Pages;
 
 /// <summary><c>GET /</c>: the newest runs of each repository.</summary>
-public sealed class HomePage(RunStore runs)
+public sealed class HomePage(IRunStore runs)
 {
     public const int RunsPerRepository = 20;
 

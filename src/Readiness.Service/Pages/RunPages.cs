@@ -5,7 +5,7 @@ using Readiness.Service.Worker;
 namespace Readiness.Service.Pages;
 
 /// <summary><c>GET /runs/{id}</c> (HTML), <c>/runs/{id}.json</c> and <c>/runs/{id}.md</c>.</summary>
-public sealed class RunPages(RunStore runs, ReportDocuments documents)
+public sealed class RunPages(IRunStore runs, ReportDocuments documents)
 {
     public IResult Html(long id)
     {

@@ -14,4 +14,7 @@ public enum EnqueueOutcome
 
     /// <summary>A job already queued for the same pull request now points at the newer head commit.</summary>
     Collapsed,
+
+    /// <summary>The repository already holds as many queued jobs as allowed; nothing was recorded.</summary>
+    QueueFull,
 }

@@ -10,4 +10,5 @@ public sealed record Job(
     string? LeaseOwner,
     DateTimeOffset? LeaseUntil,
     int Attempts,
-    long? RunId);
+    long? RunId,
+    string? Error = null);

@@ -33,6 +33,12 @@ public sealed partial record PullRequestEvent(
         {
             using var doc = JsonDocument.Parse(body.ToArray(), new JsonDocumentOptions { MaxDepth = 64 });
             var root = doc.RootElement;
+            if (root.ValueKind != JsonValueKind.Object)
+            {
+                problem = $"the payload is a JSON {root.ValueKind.ToString().ToLowerInvariant()}, not an object";
+                return null;
+            }
+
             var action = Str(root, "action");
             var pr = Obj(root, "pull_request");
             var repo = Obj(root, "repository");
@@ -40,7 +46,7 @@ public sealed partial record PullRequestEvent(
             var @base = pr is { } p2 ? Obj(p2, "base") : null;
             var number = root.TryGetProperty("number", out var n) && n.ValueKind == JsonValueKind.Number && n.TryGetInt32(out var num)
                 ? num
-                : pr is { } p3 && p3.TryGetProperty("number", out var n2) && n2.TryGetInt32(out var num2) ? num2 : 0;
+                : pr is { } p3 && p3.TryGetProperty("number", out var n2) && n2.ValueKind == JsonValueKind.Number && n2.TryGetInt32(out var num2) ? num2 : 0;
             var fullName = repo is { } r ? Str(r, "full_name") : null;
             var cloneUrl = repo is { } r2 ? Str(r2, "clone_url") : null;
             var sha = head is { } h ? Str(h, "sha") : null;
@@ -71,7 +77,7 @@ public sealed partial record PullRequestEvent(
             }
 
             long? installation = root.TryGetProperty("installation", out var inst) && inst.ValueKind == JsonValueKind.Object
-                && inst.TryGetProperty("id", out var id) && id.TryGetInt64(out var iid) ? iid : null;
+                && inst.TryGetProperty("id", out var id) && id.ValueKind == JsonValueKind.Number && id.TryGetInt64(out var iid) ? iid : null;
             problem = null;
             return new PullRequestEvent(action, number, parts[0], parts[1], cloneUrl, sha.ToLowerInvariant(), baseRef, labels,
                 pr is { } p5 ? Str(p5, "body") : null, installation);
@@ -79,6 +85,12 @@ public sealed partial record PullRequestEvent(
         catch (JsonException)
         {
             problem = "the payload is not JSON";
+            return null;
+        }
+        catch (InvalidOperationException)
+        {
+            // A field of an unexpected JSON type that a check above let through: still the sender's error, one line.
+            problem = "a field of the payload has the wrong JSON type";
             return null;
         }
     }

@@ -9,7 +9,7 @@ namespace Readiness.Service.Webhooks;
 /// <c>POST /hooks/github</c>: checks the signature, records the delivery once, queues a job for release-relevant
 /// pull request events and answers at once; the worker does the rest.
 /// </summary>
-public sealed class WebhookEndpoint(ServiceSettings settings, JobStore jobs, JobSignal signal, ILogger<WebhookEndpoint> logger)
+public sealed class WebhookEndpoint(ServiceSettings settings, IJobStore jobs, JobSignal signal, ILogger<WebhookEndpoint> logger) : IDisposable
 {
     public const string Path = "/hooks/github";
     public const string EventHeader = "X-GitHub-Event";
@@ -18,22 +18,53 @@ public sealed class WebhookEndpoint(ServiceSettings settings, JobStore jobs, Job
     /// <summary>The forge caps payloads at 25 MB; pull request payloads are far smaller.</summary>
     public const int MaxBodyBytes = 5 * 1024 * 1024;
 
+    /// <summary>
+    /// Bodies read at once before their signature is known: memory for unsigned floods stays under this many times
+    /// <see cref="MaxBodyBytes"/>; a request without a well-formed signature header is refused before any is read.
+    /// </summary>
+    public const int MaxUnverifiedReads = 16;
+
+    private readonly SemaphoreSlim unverifiedReads = new(MaxUnverifiedReads, MaxUnverifiedReads);
+
     public async Task<IResult> HandleAsync(HttpContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
         var cancellationToken = context.RequestAborted;
-        var body = await ReadBodyAsync(context.Request, cancellationToken).ConfigureAwait(false);
+        var delivery = context.Request.Headers[DeliveryHeader].ToString();
+        var signature = context.Request.Headers[WebhookSignature.Header].ToString();
+        if (!WebhookSignature.IsWellFormed(signature))
+        {
+            logger.LogWarning("Refused delivery {Delivery}: {Problem}", Safe(delivery), signature.Length == 0 ? "no signature" : "malformed signature");
+            return Unsigned();
+        }
+
+        if (!await unverifiedReads.WaitAsync(TimeSpan.FromSeconds(5), cancellationToken).ConfigureAwait(false))
+        {
+            context.Response.Headers.RetryAfter = "5";
+            return Results.Json(new { error = "too many deliveries are being read; retry" }, statusCode: StatusCodes.Status503ServiceUnavailable);
+        }
+
+        byte[]? body;
+        bool signed;
+        try
+        {
+            body = await ReadBodyAsync(context.Request, cancellationToken).ConfigureAwait(false);
+            signed = body is not null && WebhookSignature.Verify(settings.WebhookSecret, body, signature);
+        }
+        finally
+        {
+            unverifiedReads.Release();
+        }
+
         if (body is null)
         {
             return Results.Json(new { error = $"the body is larger than {MaxBodyBytes} bytes" }, statusCode: StatusCodes.Status413PayloadTooLarge);
         }
 
-        var delivery = context.Request.Headers[DeliveryHeader].ToString();
-        var signature = context.Request.Headers[WebhookSignature.Header].ToString();
-        if (!WebhookSignature.Verify(settings.WebhookSecret, body, signature.Length == 0 ? null : signature))
+        if (!signed)
         {
-            logger.LogWarning("Refused delivery {Delivery}: {Problem}", Safe(delivery), signature.Length == 0 ? "no signature" : "wrong signature");
-            return Results.Json(new { error = "missing or wrong X-Hub-Signature-256" }, statusCode: StatusCodes.Status401Unauthorized);
+            logger.LogWarning("Refused delivery {Delivery}: {Problem}", Safe(delivery), "wrong signature");
+            return Unsigned();
         }
 
         var eventName = context.Request.Headers[EventHeader].ToString();
@@ -51,9 +82,10 @@ public sealed class WebhookEndpoint(ServiceSettings settings, JobStore jobs, Job
                 return Results.Json(new { error = problem }, statusCode: StatusCodes.Status400BadRequest);
             }
 
-            if (!settings.AllowNonHttpsCloneUrls && !pr.CloneUrl.StartsWith("https://", StringComparison.OrdinalIgnoreCase))
+            if (CloneUrlProblem(pr.CloneUrl) is { } cloneProblem)
             {
-                return Results.Json(new { error = "repository.clone_url must be an https URL" }, statusCode: StatusCodes.Status400BadRequest);
+                logger.LogWarning("Refused delivery {Delivery}: {Problem}", Safe(delivery), cloneProblem);
+                return Results.Json(new { error = cloneProblem }, statusCode: StatusCodes.Status400BadRequest);
             }
 
             if (PullRequestEvent.RelevantActions.Contains(pr.Action))
@@ -67,6 +99,10 @@ public sealed class WebhookEndpoint(ServiceSettings settings, JobStore jobs, Job
         {
             case EnqueueOutcome.Duplicate:
                 return Results.Json(new { status = "duplicate" }, statusCode: StatusCodes.Status200OK);
+            case EnqueueOutcome.QueueFull:
+                logger.LogWarning("Refused delivery {Delivery}: the queue of {Repository} is full", Safe(delivery), request?.Repository);
+                context.Response.Headers.RetryAfter = "60";
+                return Results.Json(new { error = $"the queue of {request?.Repository} is full; redeliver later" }, statusCode: StatusCodes.Status503ServiceUnavailable);
             case EnqueueOutcome.Ignored:
                 return Results.Json(new { status = eventName == "ping" ? "pong" : "ignored" }, statusCode: StatusCodes.Status202Accepted);
             default:
@@ -74,6 +110,37 @@ public sealed class WebhookEndpoint(ServiceSettings settings, JobStore jobs, Job
                 return Results.Json(new { status = outcome == EnqueueOutcome.Queued ? "queued" : "collapsed", job = jobId }, statusCode: StatusCodes.Status202Accepted);
         }
     }
+
+    /// <summary>
+    /// Why the service will not clone from <paramref name="url"/>: credentials in it (they would be stored), an https
+    /// host other than the forge's (the token would go there), or a non-https URL where those are not allowed.
+    /// </summary>
+    private string? CloneUrlProblem(string url)
+    {
+        if (!Uri.TryCreate(url, UriKind.Absolute, out var uri))
+        {
+            return "repository.clone_url is not an absolute URL";
+        }
+
+        if (uri.UserInfo.Length > 0)
+        {
+            return "repository.clone_url must not carry credentials";
+        }
+
+        if (uri.Scheme == Uri.UriSchemeHttps)
+        {
+            return string.Equals(uri.Host, settings.CloneHost, StringComparison.OrdinalIgnoreCase)
+                ? null
+                : $"repository.clone_url must be on the forge's host {settings.CloneHost}";
+        }
+
+        return settings.AllowNonHttpsCloneUrls ? null : "repository.clone_url must be an https URL";
+    }
+
+    public void Dispose() => unverifiedReads.Dispose();
+
+    private static IResult Unsigned() =>
+        Results.Json(new { error = "missing or wrong X-Hub-Signature-256" }, statusCode: StatusCodes.Status401Unauthorized);
 
     /// <summary>Why the event itself makes the pull request a release candidate, or null when its changes must decide.</summary>
     private string? Reason(PullRequestEvent pr)

@@ -20,6 +20,11 @@ public static class WebhookSignature
         return Prefix + Convert.ToHexStringLower(mac);
     }
 
+    /// <summary>Whether <paramref name="header"/> has the signature's form at all (checked before any body is read).</summary>
+    public static bool IsWellFormed(string? header) =>
+        header is not null && header.StartsWith(Prefix, StringComparison.Ordinal) && header.Length == Prefix.Length + 64
+        && !header.AsSpan(Prefix.Length).ContainsAnyExcept("0123456789abcdefABCDEF");
+
     /// <summary>Whether <paramref name="header"/> is the right signature of <paramref name="body"/>.</summary>
     public static bool Verify(string secret, ReadOnlySpan<byte> body, string? header)
     {

@@ -1,4 +1,5 @@
 using Readiness.Service.Configuration;
+using Readiness.Service.Forge;
 using Readiness.Service.Storage;
 
 namespace Readiness.Service.Worker;
@@ -9,7 +10,7 @@ namespace Readiness.Service.Worker;
 /// </summary>
 public sealed class JobWorker(
     ServiceSettings settings,
-    JobStore jobs,
+    IJobStore jobs,
     JobSignal signal,
     PullRequestJobProcessor processor,
     TimeProvider time,
@@ -33,6 +34,14 @@ public sealed class JobWorker(
                 if (job is null)
                 {
                     await signal.WaitAsync(IdleWait(), stoppingToken).ConfigureAwait(false);
+                    continue;
+                }
+
+                if (job.State == JobState.Failed)
+                {
+                    // Its last attempt's process died holding it: the store gave up at claim time.
+                    logger.LogError("Job {Job} failed after {Attempts} attempts: {Error}", job.Id, job.Attempts, job.Error);
+                    await ReportFailureAsync(job, job.Error ?? JobState.Failed).ConfigureAwait(false);
                     continue;
                 }
 
@@ -67,6 +76,14 @@ public sealed class JobWorker(
 
     private async Task RunAsync(Job job, string owner, CancellationToken stoppingToken)
     {
+        // Every line logged for this job, here and in the processor, forge and mirror code it calls, carries these.
+        using var scope = logger.BeginScope(new Dictionary<string, object>
+        {
+            ["DeliveryId"] = job.DeliveryId,
+            ["JobId"] = job.Id,
+            ["Repository"] = job.Request.Repository,
+            ["PullRequest"] = job.Request.Number,
+        });
         using var jobCancel = CancellationTokenSource.CreateLinkedTokenSource(stoppingToken);
         using var renewing = new CancellationTokenSource();
         var renewal = RenewAsync(job.Id, owner, jobCancel, renewing.Token);
@@ -90,6 +107,14 @@ public sealed class JobWorker(
             await renewal.ConfigureAwait(false);
             await jobs.RequeueAsync(job.Id, owner, TimeSpan.Zero, null, CancellationToken.None).ConfigureAwait(false);
             logger.LogInformation("Job {Job} returned to the queue at shutdown", job.Id);
+        }
+        catch (ForgeRateLimitedException e)
+        {
+            await renewing.CancelAsync().ConfigureAwait(false);
+            await renewal.ConfigureAwait(false);
+            var wait = e.Until - time.GetUtcNow();
+            await jobs.RequeueAsync(job.Id, owner, wait > TimeSpan.Zero ? wait : TimeSpan.Zero, e.Message, CancellationToken.None, countAttempt: false).ConfigureAwait(false);
+            logger.LogWarning("Job {Job} waits for the forge's rate limit until {Until:u}", job.Id, e.Until);
         }
         catch (OperationCanceledException) when (jobCancel.IsCancellationRequested)
         {
@@ -119,6 +144,11 @@ public sealed class JobWorker(
 
         logger.LogError("Job {Job} failed after {Attempts} attempts: {Error}", job.Id, job.Attempts, message);
         await jobs.FinishAsync(job.Id, owner, JobState.Failed, null, message, CancellationToken.None).ConfigureAwait(false);
+        await ReportFailureAsync(job, message).ConfigureAwait(false);
+    }
+
+    private async Task ReportFailureAsync(Job job, string message)
+    {
         try
         {
             await processor.ReportFailureAsync(job, message, CancellationToken.None).ConfigureAwait(false);

@@ -66,4 +66,33 @@ public sealed class SpdxExpressionParserTests
         Assert.Equal(valid, node is not null);
         Assert.Equal(valid, error is null);
     }
+
+    [Fact]
+    public void ThirtyThousandNestedParentheses_AreRefusedWithAClearError()
+    {
+        var expression = new string('(', 30_000) + "MIT" + new string(')', 30_000);
+
+        Assert.False(SpdxExpressionParser.TryParse(expression, out var node, out var error));
+        Assert.Null(node);
+        Assert.Contains("more than", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void ParenthesesDeeperThanTheBound_AreRefused()
+    {
+        var expression = new string('(', 40) + "MIT" + new string(')', 40);
+
+        Assert.False(SpdxExpressionParser.TryParse(expression, out _, out var error));
+        Assert.Contains("nested deeper than 32", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void SixtyThousandTermChain_IsRefused_NotWalkedRecursively()
+    {
+        Assert.False(SpdxExpressionParser.TryParse(string.Join(" OR ", Enumerable.Repeat("MIT", 60_000)), out _, out var error));
+        Assert.Contains("more than 512", error, StringComparison.Ordinal);
+
+        // A long but real-sized chain still parses (SPDX 3.0.1 annex: OR is left-associative, any length).
+        Assert.True(SpdxExpressionParser.TryParse(string.Join(" OR ", Enumerable.Repeat("MIT", 100)), out _, out _));
+    }
 }

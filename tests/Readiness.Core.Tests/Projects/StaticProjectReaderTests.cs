@@ -445,15 +445,19 @@ public sealed class StaticProjectReaderTests
     [Fact]
     public void ImportsOutsideTheRepositoryOrOfOtherSdks_NamedNotRead()
     {
-        var project = Single(Read((Lib, """
+        var model = Read((Lib, """
             <Project Sdk="Microsoft.NET.Sdk">
               <Import Project="/etc/bramble.props" />
               <Import Project="../../../outside.props" />
               <Import Project="Sdk.targets" Sdk="Bramble.Build.Sdk" />
               <Import Project="missing.props" />
             </Project>
-            """)));
+            """));
 
+        // The imports outside the repository are also problems of the model (the report's notes name them), not errors.
+        Assert.All(model.Problems, p => Assert.Equal(ProjectProblemKind.Skipped, p.Kind));
+        Assert.Equal([2, 3], model.Problems.Select(p => p.Line));
+        var project = Assert.Single(model.Projects);
         Assert.Contains($"{Lib}:2: import of /etc/bramble.props lies outside the repository; not read", project.Unevaluated);
         Assert.Contains($"{Lib}:3: import of ../../../outside.props lies outside the repository; not read", project.Unevaluated);
         Assert.Contains(project.Unevaluated, n => n.StartsWith($"{Lib}:4: MSBuild SDK Bramble.Build.Sdk is not read", StringComparison.Ordinal));

@@ -139,6 +139,23 @@ public sealed class SecretScannerTests
         Assert.Equal(1, result.TextFiles);
     }
 
+    // Without a byte-order mark, UTF-16 text of ASCII characters has a NUL in every second byte (Unicode 15.0 §3.10):
+    // recognised by that pattern and scanned, both byte orders; binary data with NULs elsewhere stays binary.
+    [Fact]
+    public void Utf16TextWithoutMark_IsScanned()
+    {
+        var (_, token, _) = SecretFixtures.Tokens().First();
+        var files = new InMemoryFileTree()
+            .Add("tools/publish-le.ps1", System.Text.Encoding.Unicode.GetBytes($"$key = '{token}'\r\n"))
+            .Add("tools/publish-be.ps1", System.Text.Encoding.BigEndianUnicode.GetBytes($"$key = '{token}'\r\n"))
+            .Add("data/blob.bin", [1, 0, 0, 2, 3, 0, 0, 0, 5, 6]);
+
+        var result = SecretScanner.Scan(files);
+
+        Assert.Equal(["tools/publish-be.ps1", "tools/publish-le.ps1"], result.Hits.Select(h => h.Path).Order(StringComparer.Ordinal));
+        Assert.Equal(1, result.BinaryFiles);
+    }
+
     // UTF-16 text with a byte-order mark holds NUL bytes but is text; the scan decodes it.
     [Fact]
     public void Utf16Text_IsScanned()

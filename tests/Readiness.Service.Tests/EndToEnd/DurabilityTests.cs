@@ -35,10 +35,10 @@ public sealed class DurabilityTests : ServiceTestBase
         await Host.DisposeAsync();
 
         // What a killed process leaves behind: a job claimed with a lease nobody renews.
-        using (var database = new Database(Path.Combine(Data.Path, "readiness.db")))
+        using (var database = new SqliteDatabase(Path.Combine(Data.Path, "readiness.db")))
         {
             database.Initialize();
-            var jobs = new JobStore(database, TimeProvider.System);
+            var jobs = new SqliteJobStore(database, TimeProvider.System);
             await jobs.RecordDeliveryAsync("delivery-1", "pull_request",
                 new JobRequest(ReleasePullRequestRepository.FullName, Repo.CloneUrl, null, 1, head, ReleasePullRequestRepository.ReleaseBranch, null, "release branch"), default);
             Assert.NotNull(await jobs.ClaimAsync("killed-process", TimeSpan.FromSeconds(2), default));

@@ -48,9 +48,9 @@ public sealed class ServiceHost : WebApplicationFactory<Program>
 
     public CapturedLogs Logs { get; }
 
-    public JobStore Jobs => Services.GetRequiredService<JobStore>();
+    public IJobStore Jobs => Services.GetRequiredService<IJobStore>();
 
-    public RunStore Runs => Services.GetRequiredService<RunStore>();
+    public IRunStore Runs => Services.GetRequiredService<IRunStore>();
 
     /// <summary>Sends a delivery signed with the configured secret (or the given signature header).</summary>
     public async Task<HttpResponseMessage> DeliverAsync(string payload, string deliveryId, string eventName = "pull_request", string? signature = "sign")

@@ -66,6 +66,9 @@ public abstract class ServiceTestBase : IAsyncLifetime
         return host;
     }
 
+    /// <summary>Disposes <paramref name="host"/> with the test's own hosts.</summary>
+    protected void Track(ServiceHost host) => hosts.Add(host);
+
     protected static async Task WaitUntil(Func<bool> condition, string what, int seconds = 30)
     {
         var until = DateTime.UtcNow.AddSeconds(seconds);

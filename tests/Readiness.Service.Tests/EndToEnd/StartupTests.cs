@@ -49,6 +49,32 @@ public sealed class StartupTests
         Assert.DoesNotContain("a-token-not-to-show", errors + await stdout, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public async Task ServiceProgram_OnAPortInUse_ExitsWithOneLineNamingIt()
+    {
+        using var data = new TempDirectory("readiness-startup-");
+        using var taken = new System.Net.Sockets.TcpListener(System.Net.IPAddress.Loopback, 0);
+        taken.Start();
+        var port = ((System.Net.IPEndPoint)taken.LocalEndpoint).Port;
+        var start = new ProcessStartInfo("dotnet") { RedirectStandardError = true, RedirectStandardOutput = true, WorkingDirectory = data.Path };
+        start.ArgumentList.Add(Path.Combine(AppContext.BaseDirectory, "Readiness.Service.dll"));
+        start.ArgumentList.Add($"--urls=http://127.0.0.1:{port}");
+        start.Environment["Readiness__Forge__Token"] = "a-token-not-to-show";
+        start.Environment["Readiness__DataFolder"] = data.Path;
+        start.Environment["Readiness__Forge__WebhookSecret"] = "a-secret";
+        start.Environment["Logging__LogLevel__Default"] = "None";
+        using var process = Process.Start(start)!;
+        var stderr = process.StandardError.ReadToEndAsync();
+        var stdout = process.StandardOutput.ReadToEndAsync();
+        Assert.True(process.WaitForExit(60_000), "the service did not stop");
+        var errors = await stderr;
+        Assert.Equal(Program.CannotListen, process.ExitCode);
+        var line = Assert.Single(errors.Split('\n', StringSplitOptions.RemoveEmptyEntries));
+        Assert.StartsWith("readiness service: cannot listen: ", line, StringComparison.Ordinal);
+        Assert.Contains($"127.0.0.1:{port}", line, StringComparison.Ordinal);
+        Assert.DoesNotContain(" at ", await stdout + errors, StringComparison.Ordinal);
+    }
+
     private static async Task<ServiceConfigurationException> StartAsync(string dataFolder, params (string Key, string Value)[] settings)
     {
         var app = ServiceApp.Build(["--urls=http://127.0.0.1:0"], b => b.Configuration.AddInMemoryCollection(

@@ -26,7 +26,21 @@ public sealed class PullRequestEventTests
         Assert.Equal(42, e.InstallationId);
     }
 
+    [Fact]
+    public void FieldsOfTheWrongType_AreIgnoredOrRefused_NeverThrown()
+    {
+        var json = """{"action":"opened","number":1,"installation":{"id":"many"},"pull_request":{"head":{"sha":"aaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaa"},"base":{"ref":"main"},"labels":[1,{"name":2},{"name":"release"}],"body":7},"repository":{"full_name":"a/b","clone_url":"https://git.example/a/b.git"}}""";
+        var e = PullRequestEvent.Parse(Encoding.UTF8.GetBytes(json), out var problem);
+        Assert.Null(problem);
+        Assert.Null(e!.InstallationId);
+        Assert.Null(e.Body);
+        Assert.Equal(["release"], e.Labels);
+    }
+
     [Theory]
+    [InlineData("[1, 2]")]
+    [InlineData("null")]
+    [InlineData("""{"action":"opened","pull_request":{"number":"seven"}}""")]
     [InlineData("not json")]
     [InlineData("{}")]
     [InlineData("""{"action":"opened","number":1,"repository":{"full_name":"a/b","clone_url":"u"},"pull_request":{"head":{"sha":"nothex"},"base":{"ref":"main"}}}""")]

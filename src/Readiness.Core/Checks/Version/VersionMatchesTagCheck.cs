@@ -24,24 +24,28 @@ public sealed class VersionMatchesTagCheck : ICheck
         ArgumentNullException.ThrowIfNull(context);
         var tag = context.Release.Tag;
         var match = tag is null ? null : context.Release.TagPattern.Match(tag.Name);
+        // Before tagging, --version is the release's version: the files must already say it (a forgotten bump fails).
+        var candidate = match?.Version
+            ?? (tag is null && context.Release.VersionSource == ReleaseFacts.VersionOptionSource ? context.Release.Version : null);
+        var says = match is not null ? $"Tag {tag!.Name} says {match.Value.Version}" : $"--version says {candidate}";
         foreach (var project in context.Projects.Packable)
         {
             var declared = DeclaredVersion.Of(project);
             var evidence = declared.Location is { } l ? new Evidence(l.Path, l.Line) : new Evidence(project.Path);
-            if (tag is null || match is null)
+            if (candidate is null)
             {
                 yield return Finding.Skip(
                     tag is null
-                        ? "No release tag at this commit; nothing to compare (pass --tag, or tag the commit)."
+                        ? "No release tag at this commit; nothing to compare (pass --tag or --version, or tag the commit)."
                         : $"Tag {tag.Name} does not match the tag pattern {context.Release.TagPattern.Pattern}.",
                     project.PackageId,
                     evidence);
                 continue;
             }
 
-            if (match.Value.Id is { } taggedId && !string.Equals(taggedId, project.PackageId, StringComparison.OrdinalIgnoreCase))
+            if (match?.Id is { } taggedId && !string.Equals(taggedId, project.PackageId, StringComparison.OrdinalIgnoreCase))
             {
-                yield return Finding.Skip($"Tag {tag.Name} releases {taggedId}, not this package.", project.PackageId, evidence);
+                yield return Finding.Skip($"Tag {tag!.Name} releases {taggedId}, not this package.", project.PackageId, evidence);
                 continue;
             }
 
@@ -54,8 +58,8 @@ public sealed class VersionMatchesTagCheck : ICheck
             if (declared.Value is null)
             {
                 yield return Finding.Fail(
-                    $"Tag {tag.Name} says {match.Value.Version}, but the project declares no version (the SDK would pack 1.0.0).",
-                    $"Add <Version>{match.Value.Version}</Version> to {project.Path} or to the Directory.Build.props above it.",
+                    $"{says}, but the project declares no version (the SDK would pack 1.0.0).",
+                    $"Add <Version>{candidate}</Version> to {project.Path} or to the Directory.Build.props above it.",
                     project.PackageId,
                     evidence);
                 continue;
@@ -67,13 +71,15 @@ public sealed class VersionMatchesTagCheck : ICheck
                 continue;
             }
 
-            var same = NuGetVersion.TryParse(declared.Value, out var d) && NuGetVersion.TryParse(match.Value.Version, out var t)
+            var same = NuGetVersion.TryParse(declared.Value, out var d) && NuGetVersion.TryParse(candidate, out var t)
                 && VersionComparer.VersionRelease.Equals(d, t);
             yield return same
-                ? Finding.Pass($"{declared.Property} {declared.Value} matches tag {tag.Name}.", project.PackageId, evidence)
+                ? Finding.Pass($"{declared.Property} {declared.Value} matches {(tag is null ? "--version" : "tag " + tag.Name)}.", project.PackageId, evidence)
                 : Finding.Fail(
-                    $"Tag {tag.Name} says {match.Value.Version}, but {declared.Property} is {declared.Value} at {declared.Location}.",
-                    $"Change {declared.Property} at {declared.Location} to {match.Value.Version}, or tag the release as {context.Release.TagPattern.Format(declared.Value, project.PackageId)}.",
+                    $"{says}, but {declared.Property} is {declared.Value} at {declared.Location}.",
+                    tag is null
+                        ? $"Bump {declared.Property} at {declared.Location} to {candidate} before tagging, or release {declared.Value}."
+                        : $"Change {declared.Property} at {declared.Location} to {candidate}, or tag the release as {context.Release.TagPattern.Format(declared.Value, project.PackageId)}.",
                     project.PackageId,
                     evidence);
         }

@@ -29,7 +29,9 @@ public sealed class VersionMovesForwardCheck : ICheck
 
         var releasedId = release.Tag is { } tag ? release.TagPattern.Match(tag.Name)?.Id : null;
         var earlier = context.Snapshot.Tags
-            .Where(t => release.Tag is null || t.Name != release.Tag.Name)
+            // Tags on the release commit itself (a second name for the same release) are never earlier than it;
+            // tags that carry no release version (build numbers, words) never match the pattern (TagPattern.Match).
+            .Where(t => (release.Tag is null || t.Name != release.Tag.Name) && t.TargetCommit != context.Snapshot.Commit)
             .Select(t => (Tag: t, Match: release.TagPattern.Match(t.Name)))
             .Where(x => x.Match is not null
                 && (releasedId is null || string.Equals(x.Match.Value.Id, releasedId, StringComparison.OrdinalIgnoreCase)))

@@ -45,28 +45,40 @@ internal sealed class ConditionEvaluator(Expander expander, FileSet files, Dicti
         _ => null,
     };
 
+    /// <summary>Left to right, stopping at the first true term (MSBuild short-circuits); unknown when a term is and none is true.</summary>
     private bool? EvalOr(Or or, Run run)
     {
-        var left = Eval(or.Left, run);
-        if (left == true)
+        var unknown = false;
+        foreach (var term in or.Terms)
         {
-            return true;
+            var value = Eval(term, run);
+            if (value == true)
+            {
+                return true;
+            }
+
+            unknown |= value is null;
         }
 
-        var right = Eval(or.Right, run);
-        return right == true ? true : left is null || right is null ? null : false;
+        return unknown ? null : false;
     }
 
+    /// <summary>Left to right, stopping at the first false term; unknown when a term is and none is false.</summary>
     private bool? EvalAnd(And and, Run run)
     {
-        var left = Eval(and.Left, run);
-        if (left == false)
+        var unknown = false;
+        foreach (var term in and.Terms)
         {
-            return false;
+            var value = Eval(term, run);
+            if (value == false)
+            {
+                return false;
+            }
+
+            unknown |= value is null;
         }
 
-        var right = Eval(and.Right, run);
-        return right == false ? false : left is null || right is null ? null : true;
+        return unknown ? null : true;
     }
 
     private bool? AsBoolean(Text text, Run run)

@@ -9,9 +9,11 @@ internal static class ConditionParser
 {
     internal abstract record Node;
 
-    internal sealed record Or(Node Left, Node Right) : Node;
+    /// <summary>A chain <c>a or b or c</c>, kept flat so a chain of any length is evaluated without recursion.</summary>
+    internal sealed record Or(IReadOnlyList<Node> Terms) : Node;
 
-    internal sealed record And(Node Left, Node Right) : Node;
+    /// <summary>A chain <c>a and b and c</c>, kept flat like <see cref="Or"/>.</summary>
+    internal sealed record And(IReadOnlyList<Node> Terms) : Node;
 
     internal sealed record Not(Node Operand) : Node;
 
@@ -58,28 +60,50 @@ internal static class ConditionParser
             return null;
         }
 
-        var left = ParseAnd(t, ref p, depth);
-        while (left is not null && t[p].Kind == Kind.Or)
+        var first = ParseAnd(t, ref p, depth);
+        if (first is null || t[p].Kind != Kind.Or)
         {
-            p++;
-            var right = ParseAnd(t, ref p, depth);
-            left = right is null ? null : new Or(left, right);
+            return first;
         }
 
-        return left;
+        var terms = new List<Node> { first };
+        while (t[p].Kind == Kind.Or)
+        {
+            p++;
+            var next = ParseAnd(t, ref p, depth);
+            if (next is null)
+            {
+                return null;
+            }
+
+            terms.Add(next);
+        }
+
+        return new Or(terms);
     }
 
     private static Node? ParseAnd(List<Token> t, ref int p, int depth)
     {
-        var left = ParseRelation(t, ref p, depth);
-        while (left is not null && t[p].Kind == Kind.And)
+        var first = ParseRelation(t, ref p, depth);
+        if (first is null || t[p].Kind != Kind.And)
         {
-            p++;
-            var right = ParseRelation(t, ref p, depth);
-            left = right is null ? null : new And(left, right);
+            return first;
         }
 
-        return left;
+        var terms = new List<Node> { first };
+        while (t[p].Kind == Kind.And)
+        {
+            p++;
+            var next = ParseRelation(t, ref p, depth);
+            if (next is null)
+            {
+                return null;
+            }
+
+            terms.Add(next);
+        }
+
+        return new And(terms);
     }
 
     /// <summary>MSBuild's grammar: a relation joins two factors, and '!' belongs to the factor.</summary>

@@ -10,10 +10,15 @@ internal sealed class EvaluationNotes
     private readonly List<string> notes = [];
     private readonly HashSet<string> seen = new(StringComparer.Ordinal);
     private readonly List<(string Name, string Note)> undefined = [];
+    private int dropped;
 
     public void Add(string note)
     {
-        if (seen.Add(note))
+        if (notes.Count >= MsBuildLimits.MaxNotes)
+        {
+            dropped++;
+        }
+        else if (seen.Add(note))
         {
             notes.Add(note);
         }
@@ -38,10 +43,19 @@ internal sealed class EvaluationNotes
         var result = new List<string>(notes);
         foreach (var (name, note) in undefined)
         {
-            if (properties[name] is null && !IsExempt(name) && seen.Add(note))
+            if (result.Count >= MsBuildLimits.MaxNotes)
+            {
+                dropped++;
+            }
+            else if (properties[name] is null && !IsExempt(name) && seen.Add(note))
             {
                 result.Add(note);
             }
+        }
+
+        if (dropped > 0)
+        {
+            result.Add($"{dropped:N0} more notes of this evaluation are not listed (at most {MsBuildLimits.MaxNotes} are kept)");
         }
 
         return result;

@@ -14,6 +14,9 @@ internal sealed class Expander
     private readonly PropertyTable properties;
     private readonly PropertyFunctions functions;
 
+    /// <summary>Characters built by expansion so far in this evaluation (bounded by <see cref="MsBuildLimits.MaxExpandedCharacters"/>).</summary>
+    private long built;
+
     public Expander(PropertyTable properties, FileSet files, string projectFolder)
     {
         this.properties = properties;
@@ -43,6 +46,13 @@ internal sealed class Expander
         {
             state.Fail($"{scope.Location}: expressions nested deeper than {MsBuildLimits.MaxExpansionDepth} levels are not evaluated");
             return text;
+        }
+
+        if (built > MsBuildLimits.MaxExpandedCharacters)
+        {
+            // Values that each stay under the per-value cap can still add up (P2 = $(P1)x, P3 = $(P2)x, ...).
+            state.Fail($"{scope.Location}: this evaluation has built more than {MsBuildLimits.MaxExpandedCharacters:N0} characters of values; the rest is not evaluated");
+            return string.Empty;
         }
 
         var sb = new StringBuilder(text.Length);
@@ -84,10 +94,12 @@ internal sealed class Expander
             if (sb.Length > MsBuildLimits.MaxValueLength)
             {
                 state.Fail($"{scope.Location}: the value grows beyond {MsBuildLimits.MaxValueLength:N0} characters; cut there");
+                built += MsBuildLimits.MaxValueLength;
                 return sb.ToString(0, MsBuildLimits.MaxValueLength);
             }
         }
 
+        built += sb.Length;
         return sb.ToString();
     }
 

@@ -12,6 +12,15 @@ internal static class MsBuildLimits
     /// <summary>Longest value kept after expansion; a self-doubling property stops here.</summary>
     public const int MaxValueLength = 64 * 1024;
 
+    /// <summary>Characters built by expanding values in one evaluation; a chain of growing properties stops here.</summary>
+    public const long MaxExpandedCharacters = 16L * 1024 * 1024;
+
+    /// <summary>Element nesting in one XML document; real project files stay under 10 levels.</summary>
+    public const int MaxXmlDepth = 64;
+
+    /// <summary>Notes kept per evaluation; the rest are counted in one last note.</summary>
+    public const int MaxNotes = 200;
+
     /// <summary>Characters in one XML document (the byte bound comes from <see cref="Snapshots.FileLimits"/>).</summary>
     public const long MaxCharactersInDocument = 4L * 1024 * 1024;
 

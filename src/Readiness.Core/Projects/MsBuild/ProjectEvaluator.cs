@@ -296,6 +296,7 @@ internal sealed class ProjectEvaluator
         if (target.Kind == PathKind.Outside)
         {
             notes.Add($"{at}: import of {path} lies outside the repository; not read");
+            session.ReportImportProblem(new ProjectProblem(at.Path, at.Line, $"imports {path}, which lies outside the repository; not read (what it sets is unknown)", ProjectProblemKind.Skipped));
             return;
         }
 

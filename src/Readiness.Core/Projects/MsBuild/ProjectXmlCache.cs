@@ -50,6 +50,11 @@ internal sealed class ProjectXmlCache(IFileTree files)
         };
         try
         {
+            if (TooDeep(bytes, settings) is { } deep)
+            {
+                return new XmlLoad(null, new ProjectProblem(path, deep, $"Elements are nested deeper than {MsBuildLimits.MaxXmlDepth} levels; not read."));
+            }
+
             using var stream = new MemoryStream(bytes, writable: false);
             using var reader = XmlReader.Create(stream, settings);
             var document = XDocument.Load(reader, LoadOptions.SetLineInfo | LoadOptions.PreserveWhitespace);
@@ -81,6 +86,25 @@ internal sealed class ProjectXmlCache(IFileTree files)
             // An encoding named in the XML declaration that this runtime does not have.
             return new XmlLoad(null, new ProjectProblem(path, null, $"Unreadable XML: {e.Message}"));
         }
+    }
+
+    /// <summary>
+    /// The line where nesting first passes <see cref="MsBuildLimits.MaxXmlDepth"/>, read with a forward-only reader
+    /// before any tree is built (building and walking a tree that deep is what must not happen); null when it never does.
+    /// </summary>
+    private static int? TooDeep(byte[] bytes, XmlReaderSettings settings)
+    {
+        using var stream = new MemoryStream(bytes, writable: false);
+        using var reader = XmlReader.Create(stream, settings);
+        while (reader.Read())
+        {
+            if (reader.Depth > MsBuildLimits.MaxXmlDepth)
+            {
+                return reader is IXmlLineInfo info && info.HasLineInfo() ? info.LineNumber : null;
+            }
+        }
+
+        return null;
     }
 
     public static int Line(XObject node) => node is IXmlLineInfo info && info.HasLineInfo() ? info.LineNumber : 0;

@@ -100,9 +100,30 @@ internal sealed class PropertyFunctions(Expander expander, FileSet files, string
             ("ToLower" or "ToLowerInvariant", 0) => value.ToLowerInvariant(),
             ("ToUpper" or "ToUpperInvariant", 0) => value.ToUpperInvariant(),
             ("Trim", 0) => value.Trim(),
-            ("Replace", 2) when args[0].Length > 0 => value.Replace(args[0], args[1], StringComparison.Ordinal),
+            ("Replace", 2) when args[0].Length > 0 => BoundedReplace(value, args[0], args[1], scope, state),
             _ => null,
         };
+    }
+
+    /// <summary>
+    /// <c>Replace</c> with its result's length computed first: a result longer than
+    /// <see cref="MsBuildLimits.MaxValueLength"/> is never built (the value is left unevaluated, with the reason).
+    /// </summary>
+    private static string? BoundedReplace(string value, string old, string replacement, ExpandScope scope, ExpandState state)
+    {
+        long count = 0;
+        for (var at = value.IndexOf(old, StringComparison.Ordinal); at >= 0; at = value.IndexOf(old, at + old.Length, StringComparison.Ordinal))
+        {
+            count++;
+        }
+
+        if (value.Length + (count * (replacement.Length - (long)old.Length)) > MsBuildLimits.MaxValueLength)
+        {
+            state.Fail($"{scope.Location}: Replace would grow the value beyond {MsBuildLimits.MaxValueLength:N0} characters; not evaluated");
+            return null;
+        }
+
+        return value.Replace(old, replacement, StringComparison.Ordinal);
     }
 
     /// <summary>Splits <c>Name(args)</c>; false when anything follows the closing parenthesis (a chained call).</summary>

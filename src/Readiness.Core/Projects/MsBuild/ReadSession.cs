@@ -16,5 +16,5 @@ internal sealed class ReadSession(IFileTree tree)
 
     public IEnumerable<ProjectProblem> ImportProblems => importProblems.Values;
 
-    public void ReportImportProblem(ProjectProblem problem) => importProblems.TryAdd(problem.Path, problem);
+    public void ReportImportProblem(ProjectProblem problem) => importProblems.TryAdd(problem.Kind == ProjectProblemKind.Unreadable ? problem.Path : problem.ToString(), problem);
 }

@@ -19,6 +19,12 @@ public sealed class StaticProjectReader : IProjectModelReader
         var session = new ReadSession(files);
         var projects = new List<ProjectInfo>();
         var problems = new List<ProjectProblem>();
+        foreach (var link in files.Unread.Where(u => IsProjectFile(u.Path) || IsBuildFile(u.Path)))
+        {
+            // git stores a link as its target text; MSBuild would follow it, possibly out of the repository.
+            problems.Add(new ProjectProblem(link.Path, null, $"The project file {link.Reason}: it is not read, so nothing it declares is known."));
+        }
+
         foreach (var path in files.Paths.Where(IsProjectFile))
         {
             var load = session.Xml.Load(path);
@@ -33,7 +39,8 @@ public sealed class StaticProjectReader : IProjectModelReader
                 problems.Add(new ProjectProblem(
                     path,
                     ProjectXmlCache.Line(load.Root),
-                    "Not an SDK-style project (no Sdk attribute, Sdk element or Sdk import); its properties are not evaluated."));
+                    "Not an SDK-style project (no Sdk attribute, Sdk element or Sdk import); its properties are not evaluated.",
+                    ProjectProblemKind.NotUnderstood));
                 continue;
             }
 
@@ -55,6 +62,10 @@ public sealed class StaticProjectReader : IProjectModelReader
 
     public static bool IsProjectFile(string path) =>
         ProjectExtensions.Any(e => path.EndsWith(e, StringComparison.OrdinalIgnoreCase));
+
+    /// <summary>Files MSBuild imports by name (Directory.Build.props/targets, Directory.Packages.props) or by extension.</summary>
+    private static bool IsBuildFile(string path) =>
+        path.EndsWith(".props", StringComparison.OrdinalIgnoreCase) || path.EndsWith(".targets", StringComparison.OrdinalIgnoreCase);
 
     private static ProjectInfo ReadProject(ReadSession session, string path, XElement root)
     {

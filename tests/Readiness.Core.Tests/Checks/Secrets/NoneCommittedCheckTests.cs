@@ -73,4 +73,44 @@ public sealed class NoneCommittedCheckTests
         AssertStatus(CheckStatus.Pass, finding);
         Assert.Contains("3 tracked files (2 scanned as text, 1 binary", finding.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void NuGetConfigThatIsNotXml_IsAnError_NeverAPass()
+    {
+        // nuget.config reference: the file is XML; one that does not parse cannot be checked for credentials.
+        var files = new InMemoryFileTree().Add("nuget.config", "<configuration>\n<<packageSourceCredentials><feed><add key=\"ClearTextPassword\" value=\"x\" />\n");
+
+        var finding = Assert.Single(Run(new NoneCommittedCheck(), files: files));
+
+        Assert.Equal(CheckStatus.Error, finding.Status);
+        Assert.Contains("nuget.config", finding.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void NuGetConfigWithAUtf8ByteOrderMark_IsScanned()
+    {
+        byte[] bom = [0xEF, 0xBB, 0xBF];
+        var files = new InMemoryFileTree().Add("nuget.config", [.. bom, .. System.Text.Encoding.UTF8.GetBytes(
+            "<configuration><packageSourceCredentials><feed><add key=\"Username\" value=\"dev\" /><add key=\"ClearTextPassword\" value=\"s3cr3t-value\" /></feed></packageSourceCredentials></configuration>")]);
+
+        var finding = Assert.Single(Run(new NoneCommittedCheck(), files: files));
+
+        Assert.Equal(CheckStatus.Fail, finding.Status);
+        Assert.DoesNotContain("s3cr3t-value", finding.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void StrongNameKeyPair_IsInformation_UnlessConfiguredPrivate()
+    {
+        // .NET library guidance (strong naming): an open-source library should commit its .snk so anyone can build it.
+        // The key pair's format (PRIVATEKEYBLOB, "RSA2") is confirmed against .NET's own ExportCspBlob in SecretScannerTests.
+        var files = new InMemoryFileTree().Add("README.md", "# Bramble.Sketches\n").Add("signing/Bramble.snk", SecretFixtures.SnkKeyPair());
+
+        var open = Run(new NoneCommittedCheck(), files: files);
+        Assert.DoesNotContain(open, f => f.Status == CheckStatus.Fail);
+        Assert.Contains(open, f => f.Status == CheckStatus.Pass && f.Message.StartsWith("signing/Bramble.snk is a strong-name key pair", StringComparison.Ordinal));
+
+        var kept = Run(new NoneCommittedCheck(), files: files, with: "strong-name-key-private: true\n");
+        Assert.Contains(kept, f => f.Status == CheckStatus.Fail && EvidenceText(f).SequenceEqual(["signing/Bramble.snk"]));
+    }
 }

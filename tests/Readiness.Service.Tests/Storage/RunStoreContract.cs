@@ -1,21 +1,19 @@
 using Microsoft.Extensions.Time.Testing;
 using Readiness.Service.Storage;
-using Readiness.Testing;
 
 namespace Readiness.Service.Tests.Storage;
 
-public sealed class RunStoreTests : IDisposable
+/// <summary>What every run store does; run against SQLite and PostgreSQL by the classes deriving from it.</summary>
+public abstract class RunStoreContract : IDisposable
 {
-    private readonly TempDirectory folder = new("readiness-runs-");
+    private readonly IStoreBackend backend;
     private readonly FakeTimeProvider time = new(new DateTimeOffset(2026, 11, 20, 12, 0, 0, TimeSpan.Zero));
-    private readonly Database database;
-    private readonly RunStore runs;
+    private readonly IRunStore runs;
 
-    public RunStoreTests()
+    protected RunStoreContract(IStoreBackend backend)
     {
-        database = new Database(folder.Combine("readiness.db"));
-        database.Initialize();
-        runs = new RunStore(database, time);
+        this.backend = backend;
+        runs = backend.Runs(time);
     }
 
     [Fact]
@@ -34,8 +32,21 @@ public sealed class RunStoreTests : IDisposable
         var run = runs.Find(id)!;
         Assert.Equal("bramblecote/sketches", run.Repository);
         Assert.Equal("{}", run.ReportJson);
+        Assert.Equal("md", run.ReportMarkdown);
+        Assert.Equal(1, run.PullRequest);
         Assert.Equal(new Waiver("signing.tag", "key ceremony next week"), Assert.Single(run.Waivers));
         Assert.Equal(time.GetUtcNow(), run.Created);
+        Assert.Null(runs.Find(id + 1000));
+    }
+
+    [Fact]
+    public async Task HookRunsWithoutAJob_AreAllKept()
+    {
+        var a = await runs.AddAsync(Run("bramblecote/sketches", source: RunRecord.FromHook), default);
+        var b = await runs.AddAsync(Run("bramblecote/sketches", source: RunRecord.FromHook), default);
+        Assert.NotEqual(a, b);
+        Assert.Null(runs.Find(b)!.JobId);
+        Assert.Empty(runs.Find(b)!.Waivers);
     }
 
     [Fact]
@@ -56,11 +67,10 @@ public sealed class RunStoreTests : IDisposable
 
     public void Dispose()
     {
-        database.Dispose();
-        Microsoft.Data.Sqlite.SqliteConnection.ClearAllPools();
-        folder.Dispose();
+        backend.Dispose();
+        GC.SuppressFinalize(this);
     }
 
-    private static RunRecord Run(string repository, long? jobId = null, IReadOnlyList<Waiver>? waivers = null) =>
-        new(0, repository, 1, new string('a', 40), "pull/1", "library", RunRecord.Ready, "0 blocking", RunRecord.FromService, jobId, "{}", "md", null, waivers ?? [], default);
+    private static RunRecord Run(string repository, long? jobId = null, IReadOnlyList<Waiver>? waivers = null, string source = RunRecord.FromService) =>
+        new(0, repository, 1, new string('a', 40), "pull/1", "library", RunRecord.Ready, "0 blocking", source, jobId, "{}", "md", null, waivers ?? [], default);
 }

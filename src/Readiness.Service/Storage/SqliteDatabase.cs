@@ -7,7 +7,7 @@ namespace Readiness.Service.Storage;
 /// The service's SQLite file (WAL mode): deliveries seen, jobs, runs. Writes go through one writer thread in
 /// batched transactions; reads run beside them on their own connections.
 /// </summary>
-public sealed class Database : IDisposable
+public sealed class SqliteDatabase : IDisposable
 {
     private const string Schema = """
         CREATE TABLE IF NOT EXISTS deliveries(
@@ -55,20 +55,28 @@ public sealed class Database : IDisposable
             waivers_json TEXT,
             created INTEGER NOT NULL);
         CREATE INDEX IF NOT EXISTS runs_repository ON runs(repository, id);
+        CREATE TABLE IF NOT EXISTS forge_limits(scope TEXT PRIMARY KEY, until INTEGER NOT NULL);
         """;
 
+    /// <summary>The write-ahead log is truncated when a checkpoint finds it larger than this.</summary>
+    public const long DefaultWalLimitBytes = 64L * 1024 * 1024;
+
     private const int MaxBatch = 128;
-    private static readonly TimeSpan CheckpointEvery = TimeSpan.FromSeconds(2);
+    private readonly TimeSpan checkpointEvery;
+    private readonly long walLimitBytes;
+    private int checkpointing;
     private readonly Channel<IWrite> writes = Channel.CreateUnbounded<IWrite>(new UnboundedChannelOptions { SingleReader = true });
     private readonly string connectionString;
     private readonly Lock gate = new();
     private Thread? writer;
     private Timer? checkpoints;
 
-    public Database(string path)
+    public SqliteDatabase(string path, long walLimitBytes = DefaultWalLimitBytes, TimeSpan? checkpointEvery = null)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
         Path = path;
+        this.walLimitBytes = walLimitBytes;
+        this.checkpointEvery = checkpointEvery ?? TimeSpan.FromSeconds(2);
         connectionString = new SqliteConnectionStringBuilder
         {
             DataSource = path,
@@ -90,12 +98,16 @@ public sealed class Database : IDisposable
 
     public string Path { get; }
 
+    /// <summary>The write-ahead log's size now (0 when there is none).</summary>
+    public long WalBytes => File.Exists(Path + "-wal") ? new FileInfo(Path + "-wal").Length : 0;
+
     /// <summary>Creates the file and the tables when missing; turns on WAL.</summary>
     public void Initialize()
     {
         Directory.CreateDirectory(System.IO.Path.GetDirectoryName(Path)!);
         using var connection = Open();
         Execute(connection, "PRAGMA journal_mode=WAL;");
+        Execute(connection, $"PRAGMA journal_size_limit={walLimitBytes};");
         Execute(connection, Schema);
     }
 
@@ -121,7 +133,7 @@ public sealed class Database : IDisposable
         var write = new Write<T>(work);
         if (!writes.Writer.TryWrite(write))
         {
-            throw new ObjectDisposedException(nameof(Database));
+            throw new ObjectDisposedException(nameof(SqliteDatabase));
         }
 
         return write.Task;
@@ -162,24 +174,39 @@ public sealed class Database : IDisposable
     {
         var thread = new Thread(WriteLoop) { IsBackground = true, Name = "readiness-db-writer" };
         thread.Start();
-        checkpoints = new Timer(_ => Checkpoint(), null, CheckpointEvery, CheckpointEvery);
+        checkpoints = new Timer(_ => Checkpoint(), null, checkpointEvery, checkpointEvery);
         return thread;
     }
 
     /// <summary>
     /// Copies the write-ahead log into the database file beside the writer (a passive checkpoint waits for no one),
-    /// so the writer itself never stops for the file system's flush.
+    /// so the writer itself never stops for the file system's flush. A passive checkpoint never shrinks the log, and
+    /// under steady load readers keep it from starting over: when the log has grown past the limit, a truncating
+    /// checkpoint waits for the readers of the moment and empties it (SQLite's wal_checkpoint(TRUNCATE)).
     /// </summary>
     private void Checkpoint()
     {
+        if (Interlocked.Exchange(ref checkpointing, 1) == 1)
+        {
+            return; // the previous tick still waits for its readers
+        }
+
         try
         {
             using var connection = Open();
             Execute(connection, "PRAGMA wal_checkpoint(PASSIVE);");
+            if (WalBytes > walLimitBytes)
+            {
+                Execute(connection, "PRAGMA wal_checkpoint(TRUNCATE);");
+            }
         }
         catch (SqliteException)
         {
             // The next tick tries again.
+        }
+        finally
+        {
+            Volatile.Write(ref checkpointing, 0);
         }
     }
 

@@ -1,0 +1,3 @@
+namespace Readiness.Service.Tests.Storage;
+
+public sealed class SqliteJobStoreTests() : JobStoreContract(new SqliteBackend());

@@ -1,0 +1,3 @@
+namespace Readiness.Service.Tests.Storage;
+
+public sealed class SqliteRunStoreTests() : RunStoreContract(new SqliteBackend());
