@@ -31,6 +31,9 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
             return ExitCodes.Usage;
         }
 
+        // A wrong --output is a usage error before the inspection, not after it.
+        _ = ReportTargets.Plan(parse.GetValue(options.Format), parse.GetValue(options.Output) ?? [], new RendererCatalog().Formats, "text");
+
         if (console.Env(DocsUrlVariable) is { } docs && !CheckPages.IsValidBase(docs))
         {
             await console.Error.WriteLineAsync($"readiness: {DocsUrlVariable} must be an absolute http(s) URL, not '{docs}'").ConfigureAwait(false);
@@ -54,8 +57,8 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
 
             return ExitCodes.Usage;
         }
-        await WriteReportAsync(report, parse.GetValue(options.Format), parse.GetValue(options.Output), cancellationToken).ConfigureAwait(false);
-        await new WorkflowIntegration(console).WriteAsync(report, parse.GetValue(options.Output) is null, cancellationToken).ConfigureAwait(false);
+        var onStandardOutput = await WriteReportAsync(report, parse.GetValue(options.Format), parse.GetValue(options.Output) ?? [], cancellationToken).ConfigureAwait(false);
+        await new WorkflowIntegration(console).WriteAsync(report, onStandardOutput, cancellationToken).ConfigureAwait(false);
         return FailPolicy.ExitCode(report, parse.GetValue(options.FailOn) ?? "block");
     }
 
@@ -140,27 +143,41 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         };
     }
 
-    public async Task WriteReportAsync(Report report, string? format, string? output, CancellationToken cancellationToken)
+    /// <summary>Renders the report once per target (<see cref="ReportTargets"/>); returns whether one went to standard output.</summary>
+    public async Task<bool> WriteReportAsync(Report report, string? format, IReadOnlyList<string> outputs, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(report);
-        var chosen = format ?? (output is not null ? FormatFromExtension(output) : "text");
-        var color = output is null && ConsoleColorPolicy.ShouldUseColor(console.IsTerminal, new Dictionary<string, string>(console.Environment));
-        var renderer = Renderers(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
-        if (output is null)
+        ArgumentNullException.ThrowIfNull(outputs);
+        var catalog = Renderers();
+        var targets = ReportTargets.Plan(format, outputs, catalog.Formats, "text");
+        var written = new List<string>();
+        foreach (var target in targets)
         {
-            renderer.Render(report, console.Out);
-            return;
+            if (target.File is null)
+            {
+                var color = ConsoleColorPolicy.ShouldUseColor(console.IsTerminal, new Dictionary<string, string>(console.Environment));
+                Renderers(color).Find(target.Format)!.Render(report, console.Out);
+                continue;
+            }
+
+            var file = console.FullPath(target.File);
+            Directory.CreateDirectory(Path.GetDirectoryName(file)!);
+            await using (var writer = new StreamWriter(file))
+            {
+                catalog.Find(target.Format)!.Render(report, writer);
+            }
+
+            written.Add(target.Format == ReportTargets.FromExtension(file) ? file : $"{file} ({target.Format})");
         }
 
-        var file = console.FullPath(output);
-        Directory.CreateDirectory(Path.GetDirectoryName(file)!);
-        await using (var writer = new StreamWriter(file))
+        var onStandardOutput = targets.Any(t => t.File is null);
+        if (written.Count > 0 && !onStandardOutput)
         {
-            renderer.Render(report, writer);
+            await console.Out.WriteLineAsync(Summary(report) + " Report written to " + string.Join(", ", written)).ConfigureAwait(false);
         }
 
-        await console.Out.WriteLineAsync(Summary(report) + $" Report written to {file}").ConfigureAwait(false);
         _ = cancellationToken;
+        return onStandardOutput;
     }
 
     /// <summary>The renderers, with the check descriptors and the check pages' address (<c>READINESS_DOCS_URL</c>).</summary>
@@ -174,14 +191,4 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
         ArgumentNullException.ThrowIfNull(report);
         return ReportWording.Sentence(report) + ".";
     }
-
-    private static string FormatFromExtension(string output) => Path.GetExtension(output).ToLowerInvariant() switch
-    {
-        ".json" => "json",
-        ".sarif" => "sarif",
-        ".xml" => "junit",
-        ".html" or ".htm" => "html",
-        ".md" or ".markdown" => "markdown",
-        _ => "text",
-    };
 }

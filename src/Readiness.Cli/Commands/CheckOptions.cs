@@ -20,7 +20,7 @@ public sealed class CheckOptions
 
     public Option<string?> Format { get; } = new("--format") { Description = "text, markdown, html, json, sarif or junit (default: text, also when piped; from --output FILE's extension when given)" };
 
-    public Option<string?> Output { get; } = new("--output") { Description = "Write the report to FILE; a short summary still goes to the terminal" };
+    public Option<string[]> Output { get; } = new("--output") { Description = "Write the report to FILE (format: --format, else the extension), or FORMAT=FILE; repeatable, so one run writes several formats. A short summary still goes to the terminal", AllowMultipleArgumentsPerToken = false };
 
     public Option<bool> Offline { get; } = new("--offline") { Description = "No network: registry checks skip" };
 

@@ -41,7 +41,7 @@ public sealed class DemoCommand(Composition composition, CliConsole console, Che
         var request = new RunRequest(new SnapshotRequest(repository, tag, tag));
         var registries = check.RegistriesFor(feed, TimeSpan.FromSeconds(5), noCache: true);
         var report = await composition.Runner.RunAsync(request, registries, cancellationToken).ConfigureAwait(false);
-        await check.WriteReportAsync(report, "text", null, cancellationToken).ConfigureAwait(false);
+        await check.WriteReportAsync(report, "text", Array.Empty<string>(), cancellationToken).ConfigureAwait(false);
 
         var html = Path.Combine(folder, "readiness-report.html");
         await using (var writer = new StreamWriter(html))
