@@ -1,6 +1,7 @@
 using System.Net;
 
 using Markdig;
+using Markdig.Extensions.AutoIdentifiers;
 using Markdig.Extensions.AutoLinks;
 using Markdig.Extensions.GenericAttributes;
 using Markdig.Syntax;
@@ -53,6 +54,9 @@ public sealed class HtmlRenderer : IReportRenderer
         var builder = new MarkdownPipelineBuilder().UseAdvancedExtensions().DisableHtml();
         builder.Extensions.TryRemove<GenericAttributesExtension>();
         builder.Extensions.TryRemove<AutoLinkExtension>();
+        // Heading ids as the forge makes them, so the summary tables' links to detail sections work in both places.
+        builder.Extensions.TryRemove<AutoIdentifierExtension>();
+        builder.UseAutoIdentifiers(AutoIdentifierOptions.GitHub);
         return builder.Build();
     }
 

@@ -25,6 +25,12 @@ public sealed class JsonRenderer : IReportRenderer
         NewLine = "\n",
     };
 
+    /// <summary>
+    /// MAJOR.MINOR of the published schema (<c>Schemas/readiness-report-1.schema.json</c>): the major part is the
+    /// <c>/1</c> of <c>schema</c>; the minor part grows when fields are added (1.1 added <c>schemaVersion</c>).
+    /// </summary>
+    public const string SchemaVersion = "1.1";
+
     public string Format => "json";
 
     public void Render(Report report, TextWriter output)
@@ -52,6 +58,7 @@ public sealed class JsonRenderer : IReportRenderer
     {
         json.WriteStartObject();
         json.WriteString(N.Schema, Report.Schema);
+        json.WriteString(N.SchemaVersion, SchemaVersion);
         json.WriteBoolean(N.Ready, report.Ready);
 
         var s = report.Subject;

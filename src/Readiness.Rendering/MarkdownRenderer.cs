@@ -7,8 +7,8 @@ namespace Readiness.Rendering;
 
 /// <summary>
 /// GitHub-flavoured Markdown for a pull request comment or a file: a hidden marker line (so the service finds and
-/// updates its own comment), the verdict, a results table, one section per failure, the manual items as a task list,
-/// notes and a footer. Everything that comes from the inspected repository is escaped (<see cref="MarkdownText"/>).
+/// updates its own comment), the verdict sentence, one table per weight (blocking, warnings, information, not judged,
+/// passed), the manual items as a task list, one detail section per failure, notes and a footer. Everything that comes from the inspected repository is escaped (<see cref="MarkdownText"/>).
 /// </summary>
 public sealed class MarkdownRenderer : IReportRenderer
 {
@@ -30,20 +30,37 @@ public sealed class MarkdownRenderer : IReportRenderer
     internal static string RenderBody(Report report)
     {
         var md = new MarkdownBuilder();
-        md.Line(report.Ready ? "## ✅ Ready" : "## ❌ Not ready");
+        md.Line($"## Release check: {ReportWording.Verdict(report.Ready)}");
+        md.Blank();
+        md.Line($"**{MarkdownText.Inline(ReportWording.Sentence(report))}**");
         md.Blank();
         md.Line(Subject(report.Subject));
-        md.Blank();
-        var blocking = report.Summary.Blocking;
-        md.Line($"**{blocking} blocking** · {ReportFacts.Counts(report.Summary, " · ")}");
 
-        WriteTable(md, report);
-        foreach (var result in ReportFacts.Failures(report))
+        var anchors = new AnchorNames();
+        var detailed = new Dictionary<CheckResult, string>(ReferenceEqualityComparer.Instance);
+        foreach (var failure in ReportFacts.Failures(report))
         {
-            WriteFailure(md, result);
+            detailed[failure] = anchors.Next(DetailHeading(failure));
         }
 
+        var judged = report.ByImportance().Where(r => !ReportFacts.IsManualItem(r)).ToList();
+        WriteGroup(md, "Blocking failures", judged.Where(r => r.IsBlocking), detailed);
+        WriteGroup(md, "Warnings", judged.Where(r => !r.IsBlocking && IsFinding(r) && r.Severity != Severity.Info), detailed);
+        WriteGroup(md, "Information", judged.Where(r => !r.IsBlocking && IsFinding(r) && r.Severity == Severity.Info), detailed);
         WriteManual(md, report);
+        WriteGroup(md, "Not judged", judged.Where(r => r.Status == CheckStatus.Skip), detailed);
+        WriteGroup(md, "Passed", judged.Where(r => r.Status == CheckStatus.Pass), detailed);
+
+        if (detailed.Count > 0)
+        {
+            md.Blank();
+            md.Line("### Details");
+            foreach (var result in ReportFacts.Failures(report))
+            {
+                WriteFailure(md, result);
+            }
+        }
+
         if (report.Notes.Count > 0)
         {
             md.Blank();
@@ -63,17 +80,23 @@ public sealed class MarkdownRenderer : IReportRenderer
         return md.ToString();
     }
 
+    /// <summary>The heading of a failure's detail section; its anchor is what the group tables link to.</summary>
+    internal static string DetailHeading(CheckResult result) =>
+        string.IsNullOrEmpty(result.Package) ? UntrustedText.OneLine(result.Check) : $"{UntrustedText.OneLine(result.Check)} — {UntrustedText.OneLine(result.Package)}";
+
+    private static bool IsFinding(CheckResult result) => result.Status is CheckStatus.Fail or CheckStatus.Error;
+
     private static string Subject(ReportSubject subject)
     {
         var parts = new List<string>
         {
-            "version **" + Value(subject.Version, "unknown") + "**",
-            subject.Tag is null ? "no tag" : "tag **" + Value(subject.Tag, "none") + "**",
-            "commit **" + Value(ReportFacts.ShortCommit(subject.Commit), "unknown") + "**",
-            "checklist **" + Value(subject.Checklist, "unknown") + "**",
+            "version " + Value(subject.Version, "unknown"),
+            subject.Tag is null ? "no tag" : "tag " + Value(subject.Tag, "none"),
+            "commit " + Value(ReportFacts.ShortCommit(subject.Commit), "unknown"),
+            "checklist " + Value(subject.Checklist, "unknown"),
             subject.Inspected == InspectionKind.Worktree ? "read from the working tree" : "read from the commit",
         };
-        var line = string.Join(" · ", parts);
+        var line = string.Join(", ", parts);
         return char.ToUpperInvariant(line[0]) + line[1..];
     }
 
@@ -83,29 +106,36 @@ public sealed class MarkdownRenderer : IReportRenderer
         return escaped.Length > 0 ? escaped : fallback;
     }
 
-    private static void WriteTable(MarkdownBuilder md, Report report)
+    /// <summary>
+    /// One table per weight (blocking, warnings, information, not judged, passed), so the section says how much a
+    /// row matters and the rows need no status column; a failure's check links to its detail section.
+    /// </summary>
+    private static void WriteGroup(MarkdownBuilder md, string title, IEnumerable<CheckResult> results, Dictionary<CheckResult, string> detailed)
     {
-        if (report.Results.Count == 0)
+        var rows = results.ToList();
+        if (rows.Count == 0)
         {
             return;
         }
 
         md.Blank();
-        md.Line("| status | severity | check | package | message | where |");
-        md.Line("| --- | --- | --- | --- | --- | --- |");
-        foreach (var r in report.ByImportance())
+        md.Line($"### {title} ({rows.Count.ToString(CultureInfo.InvariantCulture)})");
+        md.Blank();
+        md.Line("| check | package | finding | where |");
+        md.Line("| --- | --- | --- | --- |");
+        foreach (var r in rows)
         {
             var where = string.Join(", ", r.Evidence.Select(e => MarkdownText.Inline(ReportFacts.Where(e))));
-            md.Line($"| {Icon(r.Status)} {r.Status.Name()} | {r.Severity.Name()} | {MarkdownText.Inline(r.Check)} | "
-                + $"{MarkdownText.Inline(r.Package)} | {MarkdownText.Inline(r.Message)} | {where} |");
+            var check = detailed.TryGetValue(r, out var anchor) ? $"[{MarkdownText.Inline(r.Check)}](#{anchor})" : MarkdownText.Inline(r.Check);
+            var finding = r.Status == CheckStatus.Error ? "**could not judge:** " + MarkdownText.Inline(r.Message) : MarkdownText.Inline(r.Message);
+            md.Line($"| {check} | {MarkdownText.Inline(r.Package)} | {finding} | {where} |");
         }
     }
 
     private static void WriteFailure(MarkdownBuilder md, CheckResult result)
     {
         md.Blank();
-        var package = string.IsNullOrEmpty(result.Package) ? string.Empty : " — " + MarkdownText.Inline(result.Package);
-        md.Line($"### {MarkdownText.Inline(result.Check)}{package}");
+        md.Line($"#### {MarkdownText.Inline(DetailHeading(result))}");
         var title = MarkdownText.Inline(result.Title);
         if (title.Length > 0)
         {
@@ -154,7 +184,7 @@ public sealed class MarkdownRenderer : IReportRenderer
         }
 
         md.Blank();
-        md.Line("### Manual items");
+        md.Line($"### To confirm ({items.Count.ToString(CultureInfo.InvariantCulture)})");
         md.Blank();
         foreach (var r in items)
         {
@@ -163,16 +193,46 @@ public sealed class MarkdownRenderer : IReportRenderer
             var severity = r.Severity == Severity.Block ? " **block**" : string.Empty;
             md.Line($"- {box} {MarkdownText.Inline(text)} \\({MarkdownText.Inline(r.Check)}\\){severity}");
         }
+
+        md.Blank();
+        md.Line("_Confirm an item by ticking its box in the pull request's description (ticks in this comment do not count), or with `readiness check --confirm ID`._");
     }
 
-    private static string Icon(CheckStatus status) => status switch
+    /// <summary>
+    /// GitHub's heading anchors, which Markdig's <c>AutoIdentifierOptions.GitHub</c> reproduces for the HTML page:
+    /// lower case, letters, digits, '-' and '_' kept, spaces to '-', everything else dropped, repeats numbered
+    /// <c>-1</c>, <c>-2</c> (from memory of GitHub's rendering; the HTML tests hold it to Markdig's ids).
+    /// </summary>
+    private sealed class AnchorNames
     {
-        CheckStatus.Fail => "❌",
-        CheckStatus.Error => "⛔",
-        CheckStatus.Manual => "✋",
-        CheckStatus.Skip => "➖",
-        _ => "✅",
-    };
+        private readonly Dictionary<string, int> seen = new(StringComparer.Ordinal);
+
+        public string Next(string heading)
+        {
+            var slug = new StringBuilder(heading.Length);
+            foreach (var c in heading.ToLowerInvariant())
+            {
+                if (char.IsLetterOrDigit(c) || c is '-' or '_')
+                {
+                    slug.Append(c);
+                }
+                else if (c == ' ')
+                {
+                    slug.Append('-');
+                }
+            }
+
+            var name = slug.ToString();
+            if (seen.TryGetValue(name, out var count))
+            {
+                seen[name] = count + 1;
+                return $"{name}-{count}";
+            }
+
+            seen[name] = 1;
+            return name;
+        }
+    }
 
     /// <summary>Collects lines with LF endings and at most one blank line in a row.</summary>
     private sealed class MarkdownBuilder

@@ -33,6 +33,7 @@ internal static class ReportJsonNames
     // Added to the cli.md example; the contract allows new fields.
     public const string GeneratedAt = "generatedAt";
     public const string Notes = "notes";
+    public const string SchemaVersion = "schemaVersion";
 
     public const string InspectedCommit = "commit";
     public const string InspectedWorktree = "worktree";

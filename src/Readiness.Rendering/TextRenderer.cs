@@ -57,8 +57,7 @@ public sealed class TextRenderer(bool color = false, bool verbose = false) : IRe
         }
 
         lines.Add(string.Empty);
-        var blocking = report.Summary.Blocking == 1 ? "1 blocking" : $"{report.Summary.Blocking} blocking";
-        lines.Add($"summary: {ReportFacts.Counts(report.Summary, ", ")}; {blocking}");
+        lines.Add($"summary: {ReportWording.Counts(report.Summary)}");
         if (!report.Ready)
         {
             var blockers = ReportFacts.Blocking(report).ToList();
@@ -84,6 +83,10 @@ public sealed class TextRenderer(bool color = false, bool verbose = false) : IRe
                 }
             }
         }
+
+        // The verdict again at the end, where a long report leaves the reader.
+        lines.Add(string.Empty);
+        lines.Add(style.Paint(ReportWording.Sentence(report), report.Ready ? AnsiStyle.BoldGreen : AnsiStyle.BoldRed));
 
         foreach (var line in lines)
         {
@@ -127,7 +130,7 @@ public sealed class TextRenderer(bool color = false, bool verbose = false) : IRe
         var text = result.Status is CheckStatus.Manual or CheckStatus.Pass ? result.Title : result.Message;
         var package = string.IsNullOrEmpty(result.Package) ? string.Empty : UntrustedText.OneLine(result.Package) + ": ";
         var plainHead = $"{result.Status.Name(),-6} {result.Severity.Name(),-5} {UntrustedText.OneLine(result.Check)}  ";
-        var paintedHead = $"{PaintStatus(style, result.Status)}{Pad(result.Status.Name(), 6)} {PaintSeverity(style, result.Severity)}{Pad(result.Severity.Name(), 5)} {UntrustedText.OneLine(result.Check)}  ";
+        var paintedHead = $"{PaintStatus(style, result.Status, result.Severity)}{Pad(result.Status.Name(), 6)} {PaintSeverity(style, result.Severity)}{Pad(result.Severity.Name(), 5)} {UntrustedText.OneLine(result.Check)}  ";
         var indent = new string(' ', 13);
         AddWrapped(lines, package + UntrustedText.OneLine(text), plainHead, paintedHead, indent);
         if (result.Status == CheckStatus.Manual && !string.IsNullOrWhiteSpace(result.Hint))
@@ -138,7 +141,7 @@ public sealed class TextRenderer(bool color = false, bool verbose = false) : IRe
 
     private static string Head(AnsiStyle style, CheckResult result)
     {
-        var head = $"{PaintStatus(style, result.Status)}{Pad(result.Status.Name(), 6)} {PaintSeverity(style, result.Severity)}{Pad(result.Severity.Name(), 5)} {style.Paint(UntrustedText.OneLine(result.Check), AnsiStyle.Bold)}";
+        var head = $"{PaintStatus(style, result.Status, result.Severity)}{Pad(result.Status.Name(), 6)} {PaintSeverity(style, result.Severity)}{Pad(result.Severity.Name(), 5)} {style.Paint(UntrustedText.OneLine(result.Check), AnsiStyle.Bold)}";
         return string.IsNullOrEmpty(result.Package) ? head : head + "  " + UntrustedText.OneLine(result.Package);
     }
 
@@ -147,9 +150,12 @@ public sealed class TextRenderer(bool color = false, bool verbose = false) : IRe
             ? UntrustedText.OneLine(result.Check)
             : $"{UntrustedText.OneLine(result.Check)}  {UntrustedText.OneLine(result.Package)}";
 
-    private static string PaintStatus(AnsiStyle style, CheckStatus status) => style.Paint(status.Name(), status switch
+    /// <summary>Only what blocks is red: a failed warning is yellow, a failed information check plain.</summary>
+    private static string PaintStatus(AnsiStyle style, CheckStatus status, Severity severity) => style.Paint(status.Name(), status switch
     {
-        CheckStatus.Fail => AnsiStyle.BoldRed,
+        CheckStatus.Fail when severity == Severity.Block => AnsiStyle.BoldRed,
+        CheckStatus.Fail when severity == Severity.Warn => AnsiStyle.Yellow,
+        CheckStatus.Fail => AnsiStyle.Cyan,
         CheckStatus.Error => AnsiStyle.Magenta,
         CheckStatus.Manual => AnsiStyle.Yellow,
         CheckStatus.Skip => AnsiStyle.Dim,

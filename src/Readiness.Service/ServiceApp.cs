@@ -62,7 +62,8 @@ public static class ServiceApp
         {
             var s = sp.GetRequiredService<ServiceSettings>();
             return new ForgeRetryPolicy(s.ForgeMaxRetries, s.ForgeMaxRetryDelay, sp.GetRequiredService<TimeProvider>(),
-                sp.GetService<ILogger<ForgeRetryPolicy>>() ?? NullLogger<ForgeRetryPolicy>.Instance);
+                sp.GetService<ILogger<ForgeRetryPolicy>>() ?? NullLogger<ForgeRetryPolicy>.Instance,
+                sp.GetRequiredService<IForgeLimitStore>(), s.ForgeCallTimeout);
         });
         services.AddSingleton<IForgeCredentials>(sp =>
         {
@@ -118,6 +119,9 @@ public static class ServiceApp
                 ? new SqliteJobStore(sp.GetRequiredService<SqliteDatabase>(), time, s.JobOptions)
                 : new PostgresJobStore(sp.GetRequiredService<PostgresDatabase>(), time, s.JobOptions);
         });
+        services.AddSingleton<IForgeLimitStore>(sp => sp.GetRequiredService<ServiceSettings>().PostgresConnection is null
+            ? new SqliteForgeLimitStore(sp.GetRequiredService<SqliteDatabase>())
+            : new PostgresForgeLimitStore(sp.GetRequiredService<PostgresDatabase>()));
         services.AddSingleton<IRunStore>(sp =>
         {
             var time = sp.GetRequiredService<TimeProvider>();
@@ -140,5 +144,6 @@ public static class ServiceApp
         app.MapPost("/api/runs", (HttpContext c, RunsApi a) => a.PostAsync(c));
         app.MapGet("/healthz", (HealthEndpoints h) => h.Live());
         app.MapGet("/readyz", (HealthEndpoints h) => h.Ready());
+        app.MapFallback((HttpContext c) => NotFoundPage.Render(c));
     }
 }

@@ -100,13 +100,156 @@ public sealed class ConventionVerdictTests
     public async Task ConfiguredTagPattern_IsHonoured_AndNamedAsConfigured()
     {
         using var repo = TestRepository.Create();
-        repo.WriteLibrary("1.2.0", "2026-11-20").Write(".readiness.yml", "tag-pattern: \"release-{version}\"\n").Commit("Release 1.2.0");
+        repo.WriteLibrary("1.2.0", "2026-11-02").Write(".readiness.yml", "tag-pattern: \"release-{version}\"\n").Commit("Release 1.2.0");
         repo.AnnotatedTag("1.2.0", "1.2.0\n");
 
         var (_, output, _) = await CliHarness.RunAsync(repo.Path, "check", "--ref", "1.2.0", "--offline", "--format", "json");
 
         Assert.Equal("skip", Result(output, "version.matches-tag").GetProperty("status").GetString());
         Assert.Contains(Notes(output), n => n.Contains("release-{version}: from tag-pattern", StringComparison.Ordinal));
+    }
+
+    private const string BareProject = """
+        <Project Sdk="Microsoft.NET.Sdk">
+          <PropertyGroup>
+            <TargetFramework>net10.0</TargetFramework>
+          </PropertyGroup>
+        </Project>
+
+        """;
+
+    [Fact]
+    public async Task SamplesBenchmarksAndExecutables_AreNotPackages_AndTheReportSaysWhy()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02")
+            .Write("Directory.Build.props", SampleLibrary.DirectoryBuildProps("1.2.0").Replace("<PackageLicenseExpression>MIT</PackageLicenseExpression>", string.Empty, StringComparison.Ordinal))
+            .Write("src/Bramble.Sketches/Bramble.Sketches.csproj", SampleLibrary.Project.Replace("<Description>", "<PackageLicenseExpression>MIT</PackageLicenseExpression><Description>", StringComparison.Ordinal))
+            .Write("samples/Bramble.Sketches.Tour/Bramble.Sketches.Tour.csproj", BareProject)
+            .Write("benchmarks/Bramble.Sketches.Bench/Bramble.Sketches.Bench.csproj", BareProject)
+            .Write("src/Bramble.Sketches.Cli/Bramble.Sketches.Cli.csproj", BareProject.Replace("</TargetFramework>", "</TargetFramework><OutputType>Exe</OutputType>", StringComparison.Ordinal))
+            .Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (exit, output, error) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        // NuGet pack packs every project not marked IsPackable=false; which of them a release publishes is common
+        // practice (no published source): samples, benchmarks and programs without PackAsTool are not published.
+        Assert.True(exit == 0, output + error);
+        Assert.Equal("pass", Result(output, "license.declared").GetProperty("status").GetString());
+        var notes = Notes(output);
+        Assert.Contains(notes, n => n.StartsWith("Packages: src/Bramble.Sketches/Bramble.Sketches.csproj (packable by default", StringComparison.Ordinal));
+        var others = notes.Single(n => n.StartsWith("Not packages:", StringComparison.Ordinal));
+        Assert.Contains("samples/Bramble.Sketches.Tour/Bramble.Sketches.Tour.csproj (in a 'samples' folder", others, StringComparison.Ordinal);
+        Assert.Contains("benchmarks/Bramble.Sketches.Bench/Bramble.Sketches.Bench.csproj (in a 'benchmarks' folder", others, StringComparison.Ordinal);
+        Assert.Contains("src/Bramble.Sketches.Cli/Bramble.Sketches.Cli.csproj (an executable (OutputType=Exe) without PackAsTool)", others, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task PackCommandInCi_DecidesWhichProjectsAreReleased()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02")
+            .Write("src/Bramble.Sketches.Scratch/Bramble.Sketches.Scratch.csproj", BareProject.Replace("</TargetFramework>", "</TargetFramework><Version>0.1.0</Version>", StringComparison.Ordinal))
+            .Write(".github/workflows/release.yml", SampleLibrary.Workflow + "      - run: dotnet pack src/Bramble.Sketches/Bramble.Sketches.csproj -c Release\n")
+            .Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (_, output, _) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        // dotnet pack with a project argument packs that project only (dotnet pack documentation).
+        Assert.Equal("pass", Result(output, "version.matches-tag").GetProperty("status").GetString());
+        Assert.Contains(Notes(output), n => n.Contains("Bramble.Sketches.csproj (packed by the command at .github/workflows/release.yml:12)", StringComparison.Ordinal));
+        Assert.Contains(Notes(output), n => n.Contains("Bramble.Sketches.Scratch.csproj (not named by the pack commands", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public async Task PackagesListInConfiguration_ComesFirst()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02")
+            .Write("src/Bramble.Sketches.Scratch/Bramble.Sketches.Scratch.csproj", BareProject.Replace("</TargetFramework>", "</TargetFramework><Version>0.1.0</Version>", StringComparison.Ordinal))
+            .Write(".readiness.yml", "packages: [Bramble.Sketches]\n")
+            .Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (exit, output, error) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        Assert.True(exit == 0, output + error);
+        Assert.Contains(Notes(output), n => n.Contains("Bramble.Sketches.Scratch.csproj (not listed in packages:", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public async Task AnalyzerReferenceWithoutOutputAssembly_IsNoDependency()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02")
+            .Write("src/Bramble.Sketches.Analyzers/Bramble.Sketches.Analyzers.csproj", BareProject.Replace("net10.0", "netstandard2.0", StringComparison.Ordinal).Replace("</TargetFramework>", "</TargetFramework><IsPackable>false</IsPackable>", StringComparison.Ordinal))
+            .Write("src/Bramble.Sketches/Bramble.Sketches.csproj", SampleLibrary.Project.Replace("</Project>", """
+                  <ItemGroup>
+                    <ProjectReference Include="..\Bramble.Sketches.Analyzers\Bramble.Sketches.Analyzers.csproj" OutputItemType="Analyzer" ReferenceOutputAssembly="false" />
+                  </ItemGroup>
+                </Project>
+                """, StringComparison.Ordinal))
+            .Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (_, output, _) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        // NuGet pack writes no dependency for a ProjectReference with ReferenceOutputAssembly=false (NuGet/Home#10312).
+        var result = Result(output, "deps.packable-references");
+        Assert.Equal("pass", result.GetProperty("status").GetString());
+        Assert.Contains("ReferenceOutputAssembly=false", result.GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task VersionPassedByCi_IsJudgedAsTheTagsVersion_NotTheSdkDefault()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02")
+            .Write("Directory.Build.props", SampleLibrary.DirectoryBuildProps("1.2.0").Replace("<Version>1.2.0</Version>", string.Empty, StringComparison.Ordinal))
+            .Write(".github/workflows/release.yml", SampleLibrary.Workflow + "      - run: dotnet pack src/Bramble.Sketches -p:PackageVersion=${{ github.ref_name }}\n")
+            .Commit("Release 1.2.0");
+        repo.AnnotatedTag("1.2.0", "1.2.0\n");
+
+        var (exit, output, error) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        // NuGet pack: -p:PackageVersion on the command line overrides the project's (absent) version, so the
+        // package is the tag's 1.2.0, not the SDK default 1.0.0.
+        Assert.True(exit == 0, output + error);
+        Assert.Contains("passed to the build at .github/workflows/release.yml:12", Result(output, "version.matches-tag").GetProperty("message").GetString(), StringComparison.Ordinal);
+        Assert.Equal("pass", Result(output, "version.well-formed", "Bramble.Sketches").GetProperty("status").GetString());
+    }
+
+    [Fact]
+    public async Task PlainTextChangelogInDocs_WithSpelledOutDates_HasTheEntry()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02")
+            .Delete("CHANGELOG.md")
+            .Write("docs/History.txt", "Version 1.2.0 - 2 Nov 2026\nMerge of sketches (#12)\n\n1.1.0 (2026-10-01)\nFirst sketches\n")
+            .Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (exit, output, error) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        // Keep a Changelog 1.1.0 asks for a dated section per version; the plain-text form carries the same facts.
+        Assert.True(exit == 0, output + error);
+        Assert.Contains("docs/History.txt:1", Result(output, "changelog.has-entry").GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task NotesInForgeReleases_SkipWithThatReasonOffline()
+    {
+        using var repo = TestRepository.Create();
+        repo.WriteLibrary("1.2.0", "2026-11-02").Delete("CHANGELOG.md").Write(".readiness.yml", "changelog: forge-releases\n").Commit("Release 1.2.0");
+        repo.AnnotatedTag("v1.2.0", "1.2.0\n");
+
+        var (_, output, _) = await CliHarness.RunAsync(repo.Path, "check", "--offline", "--format", "json");
+
+        var present = Result(output, "changelog.present");
+        Assert.Equal("skip", present.GetProperty("status").GetString());
+        Assert.Contains("forge's releases", present.GetProperty("message").GetString(), StringComparison.Ordinal);
     }
 
     internal static IReadOnlyList<string> Notes(string json)

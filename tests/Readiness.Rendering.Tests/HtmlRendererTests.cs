@@ -43,7 +43,19 @@ public sealed class HtmlRendererTests
         var all = document.All.ToList();
         Assert.DoesNotContain(all, e => e.Attributes.Any(a => a.Name.StartsWith("on", StringComparison.OrdinalIgnoreCase)));
         Assert.DoesNotContain(all, e => e.HasAttribute("src") || e.HasAttribute("srcset") || e.HasAttribute("style") || e.HasAttribute("formaction"));
-        Assert.All(document.QuerySelectorAll("a[href]"), a => Assert.StartsWith("https://", a.GetAttribute("href"), StringComparison.Ordinal));
+        // Links go to a cited standard (https) or to a section of this page that exists.
+        Assert.All(document.QuerySelectorAll("a[href]"), a =>
+        {
+            var href = a.GetAttribute("href")!;
+            if (href.StartsWith('#'))
+            {
+                Assert.NotNull(document.GetElementById(href[1..]));
+            }
+            else
+            {
+                Assert.StartsWith("https://", href, StringComparison.Ordinal);
+            }
+        });
 
         // One inline style sheet, in the head.
         var style = Assert.Single(document.QuerySelectorAll("style"));
@@ -103,8 +115,8 @@ public sealed class HtmlRendererTests
         Assert.Contains("[link](javascript:alert(3))", text, StringComparison.Ordinal); // note
         Assert.Contains("<javascript:alert(1)>", text, StringComparison.Ordinal); // autolink form
         Assert.Contains("Standard: Click <me>", text, StringComparison.Ordinal); // standard with a javascript: url
-        // The only link left is the one standard with an https URL.
-        var link = Assert.Single(document.QuerySelectorAll("a"));
+        // The only link that leaves the page is the one standard with an https URL; the others go to its sections.
+        var link = Assert.Single(document.QuerySelectorAll("a"), a => !a.GetAttribute("href")!.StartsWith('#'));
         Assert.Equal("https://keepachangelog.com/en/1.1.0/", link.GetAttribute("href"));
     }
 
@@ -149,13 +161,18 @@ public sealed class HtmlRendererTests
         var report = SampleReports.Demo();
         var (_, document) = Render(report);
 
-        Assert.Equal(report.Results.Count, document.QuerySelectorAll("table tbody tr").Length);
-        Assert.Equal(6, document.QuerySelectorAll("table thead th").Length);
+        // Every judged result has one row; manual items are the task list.
+        Assert.Equal(report.Results.Count(r => !r.Check.StartsWith("manual.", StringComparison.Ordinal)), document.QuerySelectorAll("table tbody tr").Length);
+        Assert.All(document.QuerySelectorAll("table"), t => Assert.Equal(["check", "package", "finding", "where"], t.QuerySelectorAll("thead th").Select(th => th.TextContent)));
+        // A failure's row links to its detail section (the ids come from Markdig's GitHub-style identifiers).
+        var first = document.QuerySelector("table tbody tr td a")!;
+        Assert.Equal("changelog.has-entry", first.TextContent);
+        Assert.Equal("changelog.has-entry — Bramble.Sketches", document.GetElementById(first.GetAttribute("href")![1..])?.TextContent);
         var boxes = document.QuerySelectorAll("li input[type=checkbox]").Cast<IHtmlInputElement>().ToList();
         Assert.Equal(2, boxes.Count);
         Assert.Single(boxes, b => b.IsChecked);
-        Assert.Contains(document.QuerySelectorAll("h3"), h => h.TextContent == "changelog.has-entry — Bramble.Sketches");
-        Assert.Equal("❌ Not ready", document.QuerySelector("h2")?.TextContent);
+        Assert.Contains(document.QuerySelectorAll("h4"), h => h.TextContent == "changelog.has-entry — Bramble.Sketches");
+        Assert.Equal("Release check: NOT READY", document.QuerySelector("h2")?.TextContent);
         // The Markdown marker comment is not rendered as text (raw HTML is disabled, so it is left out).
         Assert.DoesNotContain("readiness-report -->", document.Body!.TextContent, StringComparison.Ordinal);
         Assert.Empty(document.Body.Descendants<IComment>());

@@ -12,7 +12,8 @@ namespace Readiness.Rendering.Tests;
 public sealed class JsonRendererTests
 {
     // cli.md: the top-level fields in the example, plus the two this renderer adds (new fields may be added).
-    private static readonly string[] RootFields = ["schema", "ready", "subject", "summary", "results", "generatedAt", "notes"];
+    // schemaVersion added beside schema: the published JSON Schema's MAJOR.MINOR (cli.md lets new fields appear).
+    private static readonly string[] RootFields = ["schema", "schemaVersion", "ready", "subject", "summary", "results", "generatedAt", "notes"];
 
     // cli.md: subject { repository, commit, ref, tag, version, checklist, inspected }.
     private static readonly string[] SubjectFields = ["repository", "commit", "ref", "tag", "version", "checklist", "inspected"];

@@ -61,30 +61,63 @@ public sealed class MarkdownRendererTests
         Assert.Equal(HtmlBlockType.Comment, marker.Type);
     }
 
+    /// <summary>Each group table under its level-3 heading, with its data rows.</summary>
+    private static List<(string Heading, List<TableRow> Rows)> Groups(MarkdownDocument document) =>
+        document.Descendants<Table>()
+            .Select(t => (Text(((HeadingBlock)document[document.IndexOf(t) - 1]).Inline), t.OfType<TableRow>().Where(r => !r.IsHeader).ToList()))
+            .ToList();
+
+    private static IEnumerable<CheckResult> Judged(Report report) =>
+        report.ByImportance().Where(r => !r.Check.StartsWith("manual.", StringComparison.Ordinal));
+
     [Fact]
-    public void DemoReport_TableHasAHeaderAndOneRowPerResult()
+    public void DemoReport_OneTablePerWeight_EveryJudgedResultInExactlyOneRow()
     {
         var report = SampleReports.Demo();
-        var table = Assert.Single(Parse(report).Descendants<Table>());
-        var rows = table.OfType<TableRow>().ToList();
+        var document = Parse(report);
+        var tables = document.Descendants<Table>().ToList();
 
-        Assert.Single(rows, r => r.IsHeader);
-        Assert.Equal(report.Results.Count + 1, rows.Count);
-        Assert.All(rows, r => Assert.Equal(6, r.Count));
-        Assert.Equal(["status", "severity", "check", "package", "message", "where"], rows[0].Cast<TableCell>().Select(CellText));
-        var first = rows[1].Cast<TableCell>().Select(CellText).ToList();
-        Assert.Equal(["❌ fail", "block", "changelog.has-entry", "Bramble.Sketches"], first.Take(4));
-        Assert.Equal("CHANGELOG.md:7", first[5]);
+        Assert.All(tables, t => Assert.Equal(["check", "package", "finding", "where"], t.OfType<TableRow>().Single(r => r.IsHeader).Cast<TableCell>().Select(CellText)));
+        Assert.All(tables.SelectMany(t => t.OfType<TableRow>()), r => Assert.Equal(4, r.Count));
+        var groups = Groups(document);
+        Assert.Equal(["Blocking failures (5)", "Warnings (3)", "Not judged (3)", "Passed (10)"], groups.Select(g => g.Heading));
+        Assert.Equal(Judged(report).Count(), groups.Sum(g => g.Rows.Count));
+        var first = groups[0].Rows[0].Cast<TableCell>().Select(CellText).ToList();
+        Assert.Equal(["changelog.has-entry", "Bramble.Sketches"], first.Take(2));
+        Assert.Equal("CHANGELOG.md:7", first[3]);
+        // No status column and no pictographs: the section says how much a row matters.
+        Assert.DoesNotContain("❌", SampleReports.Render(new MarkdownRenderer(), report), StringComparison.Ordinal);
     }
 
     [Fact]
-    public void DemoReport_TableRowsFollowReportImportance()
+    public void DemoReport_RowsInEachGroupFollowReportImportance_AndBlockingRowsAreTheBlockingResults()
     {
         var report = SampleReports.Demo();
-        var rows = Assert.Single(Parse(report).Descendants<Table>()).OfType<TableRow>().Skip(1);
+        var groups = Groups(Parse(report));
+        var order = Judged(report).Select(r => r.Check + "|" + r.Package).ToList();
 
-        var checks = rows.Select(r => CellText((TableCell)r[2]) + "|" + CellText((TableCell)r[3]));
-        Assert.Equal(report.ByImportance().Select(r => r.Check + "|" + r.Package), checks);
+        foreach (var (_, rows) in groups)
+        {
+            var keys = rows.Select(r => CellText((TableCell)r[0]) + "|" + CellText((TableCell)r[1])).ToList();
+            var positions = keys.Select(k => order.IndexOf(k)).ToList();
+            Assert.Equal(positions.Order(), positions);
+        }
+
+        Assert.Equal(
+            report.Results.Where(r => r.IsBlocking).Select(r => r.Check + "|" + r.Package).Order(StringComparer.Ordinal),
+            groups[0].Rows.Select(r => CellText((TableCell)r[0]) + "|" + CellText((TableCell)r[1])).Order(StringComparer.Ordinal));
+    }
+
+    [Fact]
+    public void DemoReport_FailureRowsLinkToTheirDetailSection_AndTheSentenceIsTheSharedWording()
+    {
+        var report = SampleReports.Demo();
+        var document = Parse(report);
+        var anchors = document.Descendants<LinkInline>().Where(l => l.Url!.StartsWith('#')).ToList();
+
+        Assert.Equal(report.Results.Count(r => r.Status is CheckStatus.Fail or CheckStatus.Error), anchors.Count);
+        Assert.Equal(anchors.Count, anchors.Select(a => a.Url).Distinct().Count());
+        Assert.Contains(document.Descendants<ParagraphBlock>(), p => Text(p.Inline) == ReportWording.Sentence(report));
     }
 
     [Fact]
@@ -104,12 +137,16 @@ public sealed class MarkdownRendererTests
     public void DemoReport_HasOneSectionPerFailureOrError()
     {
         var report = SampleReports.Demo();
-        var headings = Parse(report).Descendants<HeadingBlock>().Where(h => h.Level == 3).Select(h => Text(h.Inline)).ToList();
+        var document = Parse(report);
+        var details = document.Descendants<HeadingBlock>().Where(h => h.Level == 4).Select(h => Text(h.Inline)).ToList();
 
         var expected = report.ByImportance()
             .Where(r => r.Status is CheckStatus.Fail or CheckStatus.Error)
             .Select(r => r.Package is null ? r.Check : $"{r.Check} — {r.Package}");
-        Assert.Equal([.. expected, "Manual items", "Notes"], headings);
+        Assert.Equal(expected, details);
+        Assert.Equal(
+            ["Blocking failures (5)", "Warnings (3)", "To confirm (2)", "Not judged (3)", "Passed (10)", "Details", "Notes"],
+            document.Descendants<HeadingBlock>().Where(h => h.Level == 3).Select(h => Text(h.Inline)));
     }
 
     [Fact]
@@ -121,7 +158,7 @@ public sealed class MarkdownRendererTests
         var changelog = Assert.Single(links, l => l.Url == "https://keepachangelog.com/en/1.1.0/");
         Assert.Equal("Keep a Changelog 1.1.0", Text(changelog));
         Assert.Contains(links, l => l.Url == "https://semver.org/spec/v2.0.0.html");
-        Assert.All(links, l => Assert.StartsWith("https://", l.Url, StringComparison.Ordinal));
+        Assert.All(links, l => Assert.True(l.Url!.StartsWith("https://", StringComparison.Ordinal) || l.Url.StartsWith('#'), l.Url));
         Assert.Contains(document.Descendants<ParagraphBlock>(), p => Text(p.Inline) == "Fix: Move the entries under a heading \"## [2.4.0] - 2026-11-20\".");
     }
 
@@ -136,7 +173,7 @@ public sealed class MarkdownRendererTests
         Assert.DoesNotContain(document.Descendants<LinkInline>(), l => l.IsImage);
         // Bare addresses may be autolinked by GFM renderers; nothing but http(s) may ever become a link.
         Assert.All(document.Descendants<LinkInline>(), l => Assert.True(
-            l.Url!.StartsWith("https://", StringComparison.Ordinal) || l.Url.StartsWith("http://", StringComparison.Ordinal), l.Url));
+            l.Url!.StartsWith("https://", StringComparison.Ordinal) || l.Url.StartsWith("http://", StringComparison.Ordinal) || l.Url.StartsWith('#'), l.Url));
         Assert.DoesNotContain(document.Descendants<ListBlock>(), l => l.IsOrdered);
         Assert.DoesNotContain(document.Descendants<Block>(), b => b.GetAttributes().Properties?.Count > 0);
         Assert.DoesNotContain(document.Descendants<Inline>(), i => i.GetAttributes().Properties?.Count > 0);
@@ -147,18 +184,14 @@ public sealed class MarkdownRendererTests
     {
         var report = SampleReports.Hostile();
         var document = Parse(report);
-        var rows = Assert.Single(document.Descendants<Table>()).OfType<TableRow>().Skip(1).ToList();
+        var rows = Groups(document).SelectMany(g => g.Rows).ToList();
 
-        Assert.Equal(report.Results.Count, rows.Count);
-        Assert.All(rows, r => Assert.Equal(6, r.Count));
-        foreach (var (row, result) in rows.Zip(report.ByImportance()))
-        {
-            var cells = row.Cast<TableCell>().Select(CellText).ToList();
-            Assert.Equal(result.Check, cells[2]);
-            Assert.Equal(result.Package ?? string.Empty, cells[3]);
-            Assert.Equal(Flatten(result.Message), cells[4]);
-            Assert.Equal(string.Join(", ", result.Evidence.Select(e => e.ToString().Replace("\u001b", "\\x1B", StringComparison.Ordinal).Replace("\u0007", "\\x07", StringComparison.Ordinal))), cells[5]);
-        }
+        Assert.Equal(Judged(report).Count(), rows.Count);
+        Assert.All(rows, r => Assert.Equal(4, r.Count));
+        var expected = Judged(report).Select(result => string.Join("\n", result.Check, result.Package ?? string.Empty,
+            (result.Status == CheckStatus.Error ? "could not judge: " : string.Empty) + Flatten(result.Message),
+            string.Join(", ", result.Evidence.Select(e => e.ToString().Replace("\u001b", "\\x1B", StringComparison.Ordinal).Replace("\u0007", "\\x07", StringComparison.Ordinal))))).Order(StringComparer.Ordinal);
+        Assert.Equal(expected, rows.Select(r => string.Join("\n", r.Cast<TableCell>().Select(CellText))).Order(StringComparer.Ordinal));
 
         var secrets = report.Results[0];
         var paragraphs = document.Descendants<ParagraphBlock>().Select(p => Text(p.Inline)).ToList();
@@ -166,7 +199,7 @@ public sealed class MarkdownRendererTests
         Assert.Contains(secrets.Message, paragraphs);
         Assert.Contains("Fix: " + secrets.Hint, paragraphs);
         Assert.Contains("Standard: Click <me>", paragraphs);
-        Assert.Contains(paragraphs, p => p.StartsWith("Version 1.0.0 | x · tag v1<script> · commit 3f9c2a7 · checklist check**list**", StringComparison.Ordinal));
+        Assert.Contains(paragraphs, p => p.StartsWith("Version 1.0.0 | x, tag v1<script>, commit 3f9c2a7, checklist check**list**", StringComparison.Ordinal));
         var manual = Assert.Single(document.Descendants<TaskList>());
         Assert.Equal($"{report.Results[1].Title} ({report.Results[1].Check}) block", Text(manual.Parent).Trim());
         var note = document.Descendants<ListItemBlock>().Last();
@@ -183,7 +216,7 @@ public sealed class MarkdownRendererTests
 
         Assert.Equal(2, rows.Count);
         var cells = rows[1].Cast<TableCell>().Select(CellText).ToList();
-        Assert.Equal(["❌ fail", "info", "changelog.links", "a|b", "one | two three | four", "x|y.md:2"], cells);
+        Assert.Equal(["changelog.links", "a|b", "one | two three | four", "x|y.md:2"], cells);
     }
 
     [Fact]

@@ -91,7 +91,7 @@ public sealed partial class TextRendererTests
         var report = SampleReports.Demo();
         var lines = Lines(SampleReports.Render(new TextRenderer(), report));
 
-        Assert.Contains("summary: 7 fail, 1 error, 1 manual, 3 skip, 11 pass; 6 blocking", lines);
+        Assert.Contains("summary: 6 blocking; 7 fail, 1 error, 1 manual, 3 skip, 11 pass", lines);
         var start = Array.IndexOf(lines, "blocked by:");
         var blockers = lines.Skip(start + 1).TakeWhile(l => l.Length > 0).ToList();
         // ReportSummary.Blocking counts blocking failures plus unconfirmed blocking manual items (checks.md).
@@ -115,9 +115,12 @@ public sealed partial class TextRendererTests
     {
         var lines = Lines(SampleReports.Render(new TextRenderer(), SampleReports.Demo()));
 
-        Assert.Equal("notes:", lines[^3]);
-        Assert.Equal("  - Registry checks were skipped: --offline.", lines[^2]);
-        Assert.Equal("  - Bramble.Sketches.Tests is a test project: not checked.", lines[^1]);
+        Assert.Equal("notes:", lines[^5]);
+        Assert.Equal("  - Registry checks were skipped: --offline.", lines[^4]);
+        Assert.Equal("  - Bramble.Sketches.Tests is a test project: not checked.", lines[^3]);
+        // The verdict closes the report, worded as everywhere else.
+        Assert.Equal(string.Empty, lines[^2]);
+        Assert.Equal("NOT READY: 2.4.0 — 6 blocking; 7 fail, 1 error, 1 manual, 3 skip, 11 pass", lines[^1]);
     }
 
     [Theory]
@@ -180,6 +183,6 @@ public sealed partial class TextRendererTests
         var lines = Lines(SampleReports.Render(new TextRenderer(), report));
 
         Assert.Equal("READY  version unknown, no tag, commit 3f9c2a7, checklist host-plugin", lines[0]);
-        Assert.Contains("summary: 0 fail, 0 error, 0 manual, 0 skip, 0 pass; 0 blocking", lines);
+        Assert.Contains("summary: 0 blocking; 0 fail, 0 error, 0 manual, 0 skip, 0 pass", lines);
     }
 }

@@ -6,4 +6,5 @@ namespace Readiness.Testing;
 /// <param name="Body">The request body (UTF-8).</param>
 /// <param name="Authorization">The Authorization header, if any.</param>
 /// <param name="Status">The status code answered (0 when the client went away first).</param>
-public sealed record ForgeCall(string Method, string Path, string Body, string? Authorization, int Status);
+/// <param name="At">When the answer was recorded.</param>
+public sealed record ForgeCall(string Method, string Path, string Body, string? Authorization, int Status, DateTimeOffset At = default);

@@ -375,7 +375,7 @@ public sealed partial class ForgeStandIn : IAsyncDisposable
     {
         lock (gate)
         {
-            calls.Add(new ForgeCall(method, path, body, authorization, status));
+            calls.Add(new ForgeCall(method, path, body, authorization, status, DateTimeOffset.UtcNow));
         }
     }
 

@@ -55,6 +55,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
             return ExitCodes.Usage;
         }
         await WriteReportAsync(report, parse.GetValue(options.Format), parse.GetValue(options.Output), cancellationToken).ConfigureAwait(false);
+        await new WorkflowIntegration(console).WriteAsync(report, parse.GetValue(options.Output) is null, cancellationToken).ConfigureAwait(false);
         return FailPolicy.ExitCode(report, parse.GetValue(options.FailOn) ?? "block");
     }
 
@@ -142,7 +143,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
     public async Task WriteReportAsync(Report report, string? format, string? output, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(report);
-        var chosen = format ?? (output is not null ? FormatFromExtension(output) : console.IsTerminal ? "text" : "markdown");
+        var chosen = format ?? (output is not null ? FormatFromExtension(output) : "text");
         var color = output is null && ConsoleColorPolicy.ShouldUseColor(console.IsTerminal, new Dictionary<string, string>(console.Environment));
         var renderer = Renderers(color).Find(chosen) ?? throw new InvalidOperationException($"no renderer for {chosen}");
         if (output is null)
@@ -171,9 +172,7 @@ public sealed class CheckCommand(Composition composition, CliConsole console)
     public static string Summary(Report report)
     {
         ArgumentNullException.ThrowIfNull(report);
-        var s = report.Summary;
-        var verdict = report.Ready ? "READY" : "NOT READY";
-        return $"{verdict}: {report.Subject.Version ?? "(no version)"} — {s.Pass} pass, {s.Fail} fail, {s.Skip} skip, {s.Manual} manual, {s.Error} error; {s.Blocking} blocking.";
+        return ReportWording.Sentence(report) + ".";
     }
 
     private static string FormatFromExtension(string output) => Path.GetExtension(output).ToLowerInvariant() switch

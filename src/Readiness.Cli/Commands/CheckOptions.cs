@@ -18,7 +18,7 @@ public sealed class CheckOptions
 
     public Option<string?> Checklist { get; } = new("--checklist") { Description = "Checklist NAME, PATH or URL (default: checklist in .readiness.yml, else library)" };
 
-    public Option<string?> Format { get; } = new("--format") { Description = "text, markdown, html, json, sarif or junit (default: text on a terminal, markdown otherwise)" };
+    public Option<string?> Format { get; } = new("--format") { Description = "text, markdown, html, json, sarif or junit (default: text, also when piped; from --output FILE's extension when given)" };
 
     public Option<string?> Output { get; } = new("--output") { Description = "Write the report to FILE; a short summary still goes to the terminal" };
 

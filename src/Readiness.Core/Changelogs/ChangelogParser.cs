@@ -33,11 +33,38 @@ public static partial class ChangelogParser
 {
     private static readonly MarkdownPipeline Pipeline = new MarkdownPipelineBuilder().Build();
 
+    private static readonly string[] PlainDates = ["d MMM yyyy", "d MMMM yyyy", "MMM d, yyyy", "MMMM d, yyyy", "yyyy/MM/dd", "yyyy.MM.dd"];
+
+    /// <summary>
+    /// A plain-text changelog (.txt, .rst, no extension) as Markdown: a line that is only a version, optionally after
+    /// "Version"/"Release" and followed by a date (<c>1.2.3 (2026-01-31)</c>, <c>Version 1.2.3</c>,
+    /// <c>12.1.1 - 3 Dec 2025</c>), becomes a level-2 heading; every other line stays as it is.
+    /// </summary>
+    public static string PlainTextAsMarkdown(string text)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        var lines = text.Split('\n');
+        for (var i = 0; i < lines.Length; i++)
+        {
+            var line = lines[i].TrimEnd('\r').Trim();
+            if (line.Length > 0 && line.Length < 200 && (VersionHeading().IsMatch(line) || UnreleasedHeading().IsMatch(line)))
+            {
+                lines[i] = "## " + line;
+            }
+            else if (line.Length > 0 && line.All(c => c is '=' or '-' or '~' or '^' or '*'))
+            {
+                lines[i] = string.Empty; // an reStructuredText underline
+            }
+        }
+
+        return string.Join('\n', lines);
+    }
+
     [GeneratedRegex(@"^\[?unreleased\]?$", RegexOptions.IgnoreCase | RegexOptions.CultureInvariant)]
     private static partial Regex UnreleasedHeading();
 
     [GeneratedRegex(
-        @"^(?:\[(?<version>[vV]?[0-9][^\]\s]*)\]|(?<version>[vV]?[0-9][^\s\[\]()]*))"
+        @"^(?:version\s+|release\s+)?(?:\[(?<version>[vV]?[0-9][^\]\s]*)\]|(?<version>[vV]?[0-9][^\s\[\]()]*))"
         + @"(?:\s+[-\u2013\u2014]\s*(?<date>.*?)|\s*\((?<date>[^)]*)\))?"
         + @"(?:\s*\[(?<yanked>yanked)\])?\s*$",
         RegexOptions.IgnoreCase | RegexOptions.CultureInvariant)]
@@ -163,6 +190,12 @@ public static partial class ChangelogParser
             && DateOnly.TryParseExact(dateText, "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out var parsed))
         {
             date = parsed;
+        }
+        else if (dateText is { Length: > 0 }
+            && DateOnly.TryParseExact(dateText, PlainDates, CultureInfo.InvariantCulture, DateTimeStyles.AllowWhiteSpaces, out var plain))
+        {
+            // A plain-text changelog's spelled-out date ("3 Dec 2025"): the day is known, only the form is not ISO.
+            date = plain;
         }
 
         return new HeadingRead(

@@ -17,12 +17,14 @@ public sealed class RepositoryConfigParser(ChecklistParser checklists)
         "known-ids",
         "maintenance-lines",
         "owners",
+        "packages",
         "projects-required",
         "publish-to",
         "registry-required",
         "registry-timeout",
         "release-branches",
         "require-targets",
+        "strong-name-key-private",
         "tag-pattern",
     ];
 

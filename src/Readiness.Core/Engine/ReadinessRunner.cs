@@ -46,7 +46,8 @@ public sealed class ReadinessRunner(
                 : resolver.Load(request.ChecklistName ?? config.Checklist ?? DefaultChecklist,
                     config.Checklist is not null && request.ChecklistName is null ? config.Values["checklist"].Mark : null));
         var checklist = resolver.Resolve(definition, config);
-        var model = projectReader.Read(snapshot.Files);
+        var packs = PackCommands.Read(snapshot.Files);
+        var model = PackageSelection.Apply(projectReader.Read(snapshot.Files), packs, config);
         var projectsRequired = !config.Values.TryGetValue(BuildInventory.ProjectsRequiredKey, out var required)
             || required.AsBool(BuildInventory.ProjectsRequiredKey);
         if (model.Projects.Count == 0 && projectsRequired)
@@ -92,6 +93,7 @@ public sealed class ReadinessRunner(
         }
 
         notes.Add($"Release tags: {release.TagPatternSource}.");
+        notes.AddRange(PackageSelection.Describe(model));
         notes.Add($"Version {release.Version ?? "(unknown)"} taken from {release.VersionSource}.");
         var input = new EngineInput(
             snapshot,

@@ -44,6 +44,12 @@ public sealed record ProjectInfo(
     /// <summary>A .NET tool (PackAsTool=true): its package carries the whole program and declares no dependencies.</summary>
     public bool IsTool => string.Equals(Value("PackAsTool"), "true", StringComparison.OrdinalIgnoreCase);
 
+    /// <summary>
+    /// SuppressDependenciesWhenPacking=true: the package declares no dependency group at all (NuGet pack target
+    /// inputs, learn.microsoft.com/nuget/reference/msbuild-targets#pack-target-inputs).
+    /// </summary>
+    public bool SuppressesDependencies => string.Equals(Value("SuppressDependenciesWhenPacking"), "true", StringComparison.OrdinalIgnoreCase);
+
     /// <summary>TargetFrameworks (split on ';') or TargetFramework.</summary>
     public IReadOnlyList<string> TargetFrameworks =>
         (Value("TargetFrameworks") ?? Value("TargetFramework") ?? string.Empty)

@@ -3,6 +3,9 @@ namespace Readiness.Core.Secrets;
 /// <summary>Binary key containers recognised by name and format.</summary>
 public static class KeyFiles
 {
+    /// <summary>The kind a <c>.snk</c> holding the private key is reported as.</summary>
+    public const string StrongNameKeyPair = "strong-name key pair (.snk with the private key)";
+
     /// <summary>
     /// What a key file holds, or null when it is not a private-key container.
     /// <c>.pfx</c>/<c>.p12</c>: PKCS#12 (RFC 7292), the format for a certificate together with its private key.
@@ -21,7 +24,7 @@ public static class KeyFiles
                 return "PKCS#12 file (.pfx/.p12), the container of a certificate and its private key";
             case ".snk":
                 var bytes = read();
-                return bytes is not null && IsPrivateKeyBlob(bytes) ? "strong-name key pair (.snk with the private key)" : null;
+                return bytes is not null && IsPrivateKeyBlob(bytes) ? StrongNameKeyPair : null;
             default:
                 return null;
         }

@@ -9,7 +9,9 @@ namespace Readiness.Core.Secrets;
 public static class SecretShapes
 {
     private const string Dashes = "-----";
-    private const RegexOptions Options = RegexOptions.CultureInvariant | RegexOptions.ExplicitCapture | RegexOptions.Compiled;
+    // Not RegexOptions.Compiled: compiling every shape to IL and JIT-compiling it costs more at start than the
+    // interpreter spends on the few files whose prefixes match; the ahead-of-time build interprets them anyway.
+    private const RegexOptions Options = RegexOptions.CultureInvariant | RegexOptions.ExplicitCapture;
     private static readonly TimeSpan Timeout = TimeSpan.FromSeconds(2);
 
     /// <summary>The start of every PEM-style armour line (RFC 7468 §2).</summary>

@@ -43,6 +43,19 @@ public static class VersionSourceDetector
             }
         }
 
+        foreach (var config in new[] { "GitVersion.yml", "GitVersion.yaml" })
+        {
+            if (files.Exists(config))
+            {
+                return $"the version is computed from git tags by GitVersion ({config})";
+            }
+        }
+
+        if (Projects.PackCommands.Read(files).VersionArguments is [var passed, ..])
+        {
+            return $"the version is passed to the build at {passed} (CI or a build script)";
+        }
+
         if (declared.Value is { } v && Placeholders.Contains(v, StringComparer.OrdinalIgnoreCase))
         {
             return $"{declared.Property} is the placeholder {v} ({declared.Location}); the real version is passed at build time";

@@ -99,6 +99,9 @@ public sealed class ServiceSettings
 
     public TimeSpan JobRetryDelay { get; init; } = TimeSpan.FromSeconds(30);
 
+    /// <summary>How long one forge call may take before it is cancelled and retried.</summary>
+    public TimeSpan ForgeCallTimeout { get; init; } = TimeSpan.FromSeconds(15);
+
     public bool UsesApp => AppId is not null;
 
     /// <summary>The password inside <see cref="PostgresConnection"/>, for redaction.</summary>
@@ -219,6 +222,7 @@ public sealed class ServiceSettings
             PostgresConnection = ReadPostgresConnection(c, Key("PostgresConnection")),
             JobRetryDelay = TimeSpan.FromMilliseconds(Int(c, "Worker:RetryDelayMilliseconds", 30_000, 0, 3_600_000)),
             ForgeMaxRetries = Int(c, "Forge:MaxRetries", 4, 0, 20),
+            ForgeCallTimeout = TimeSpan.FromMilliseconds(Int(c, "Forge:CallTimeoutMilliseconds", 15_000, 50, 300_000)),
             ForgeMaxRetryDelay = TimeSpan.FromMilliseconds(Int(c, "Forge:MaxRetryDelayMilliseconds", 120_000, 0, 3_600_000)),
         };
     }

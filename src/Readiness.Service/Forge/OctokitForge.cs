@@ -36,7 +36,7 @@ public sealed class OctokitForge(OctokitConnections connections, IForgeCredentia
 
             var updated = await client.Issue.Comment.Update(repo.Owner, repo.Name, existing.Id, body).WaitAsync(ct).ConfigureAwait(false);
             return new ForgeComment(updated.Id, updated.HtmlUrl, false);
-        }, cancellationToken).ConfigureAwait(false);
+        }, cancellationToken, Scope(repo)).ConfigureAwait(false);
     }
 
     public async Task SetStatusAsync(ForgeRepository repository, ForgeCommitStatus status, CancellationToken cancellationToken)
@@ -60,8 +60,12 @@ public sealed class OctokitForge(OctokitConnections connections, IForgeCredentia
         {
             var client = await ClientAsync(repository, ct).ConfigureAwait(false);
             return await client.Repository.Status.Create(repository.Owner, repository.Name, status.Sha, request).WaitAsync(ct).ConfigureAwait(false);
-        }, cancellationToken).ConfigureAwait(false);
+        }, cancellationToken, Scope(repository)).ConfigureAwait(false);
     }
+
+    /// <summary>Rate limits count per token: per app installation, or the one plain token.</summary>
+    private static string Scope(ForgeRepository repository) =>
+        repository.InstallationId is { } id ? "installation:" + id.ToString(System.Globalization.CultureInfo.InvariantCulture) : ForgeRetryPolicy.TokenScope;
 
     private async Task<GitHubClient> ClientAsync(ForgeRepository repository, CancellationToken cancellationToken)
     {

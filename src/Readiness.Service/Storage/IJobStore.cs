@@ -24,8 +24,11 @@ public interface IJobStore
     /// <summary>Ends a job this owner holds (done, skipped, superseded or failed); false when the lease was lost.</summary>
     Task<bool> FinishAsync(long jobId, string owner, string state, long? runId, string? error, CancellationToken cancellationToken);
 
-    /// <summary>Puts a job this owner holds back in the queue, due after <paramref name="delay"/>.</summary>
-    Task<bool> RequeueAsync(long jobId, string owner, TimeSpan delay, string? error, CancellationToken cancellationToken);
+    /// <summary>
+    /// Puts a job this owner holds back in the queue, due after <paramref name="delay"/>; with
+    /// <paramref name="countAttempt"/> false its claim is not counted (the forge asked it to wait; it did not fail).
+    /// </summary>
+    Task<bool> RequeueAsync(long jobId, string owner, TimeSpan delay, string? error, CancellationToken cancellationToken, bool countAttempt = true);
 
     /// <summary>Whether a newer job for the same pull request is waiting or running.</summary>
     bool HasNewer(Job job);

@@ -44,7 +44,8 @@ internal static class JobSql
         """;
 
     public const string Requeue = """
-        UPDATE jobs SET state = 'queued', not_before = @due, error = @error, lease_owner = NULL, lease_until = NULL, updated = @now
+        UPDATE jobs SET state = 'queued', not_before = @due, error = @error, lease_owner = NULL, lease_until = NULL, updated = @now,
+            attempts = attempts - @refund
         WHERE id = @id AND lease_owner = @owner AND state = 'running'
         """;
 

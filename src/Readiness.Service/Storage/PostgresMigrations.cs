@@ -58,5 +58,6 @@ internal static class PostgresMigrations
                 created BIGINT NOT NULL);
             CREATE INDEX runs_repository ON runs(repository, id);
             """),
+        (2, "CREATE TABLE forge_limits(scope TEXT PRIMARY KEY, until BIGINT NOT NULL);"),
     ];
 }

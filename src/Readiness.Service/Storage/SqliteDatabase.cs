@@ -55,6 +55,7 @@ public sealed class SqliteDatabase : IDisposable
             waivers_json TEXT,
             created INTEGER NOT NULL);
         CREATE INDEX IF NOT EXISTS runs_repository ON runs(repository, id);
+        CREATE TABLE IF NOT EXISTS forge_limits(scope TEXT PRIMARY KEY, until INTEGER NOT NULL);
         """;
 
     /// <summary>The write-ahead log is truncated when a checkpoint finds it larger than this.</summary>

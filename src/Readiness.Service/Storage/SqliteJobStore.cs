@@ -43,56 +43,41 @@ public sealed class SqliteJobStore(SqliteDatabase database, TimeProvider time, J
         return Change(JobSql.Finish, c => c.With("@state", state).With("@run", runId).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner), cancellationToken);
     }
 
-    public Task<bool> RequeueAsync(long jobId, string owner, TimeSpan delay, string? error, CancellationToken cancellationToken)
+    public Task<bool> RequeueAsync(long jobId, string owner, TimeSpan delay, string? error, CancellationToken cancellationToken, bool countAttempt = true)
     {
         var now = Now();
-        return Change(JobSql.Requeue, c => c.With("@due", now + (long)delay.TotalMilliseconds).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner), cancellationToken);
+        return Change(JobSql.Requeue, c => c.With("@due", now + (long)delay.TotalMilliseconds).With("@error", error).With("@now", now).With("@id", jobId).With("@owner", owner).With("@refund", countAttempt ? 0 : 1), cancellationToken);
     }
 
     public bool HasNewer(Job job)
     {
         ArgumentNullException.ThrowIfNull(job);
         using var c = database.Open();
-        using var q = Query(c, JobSql.HasNewer).With("@repo", job.Request.Repository).With("@pr", job.Request.Number).With("@id", job.Id);
-        return (long)q.ExecuteScalar()! > 0;
+        return JobReads.HasNewer(c, job);
     }
 
     public Job? Find(long jobId)
     {
         using var c = database.Open();
-        using var q = Query(c, JobSql.Find).With("@id", jobId);
-        using var reader = q.ExecuteReader();
-        return reader.Read() ? JobSql.Read(reader) : null;
+        return JobReads.Find(c, jobId);
     }
 
     public IReadOnlyDictionary<string, long> CountByState()
     {
         using var c = database.Open();
-        using var q = Query(c, JobSql.CountByState);
-        using var reader = q.ExecuteReader();
-        var counts = new Dictionary<string, long>(StringComparer.Ordinal);
-        while (reader.Read())
-        {
-            counts[reader.GetString(0)] = reader.GetInt64(1);
-        }
-
-        return counts;
+        return JobReads.CountByState(c);
     }
 
     public DateTimeOffset? NextDue()
     {
         using var c = database.Open();
-        using var q = Query(c, JobSql.NextDue);
-        return q.ExecuteScalar() is long ms ? DateTimeOffset.FromUnixTimeMilliseconds(ms) : null;
+        return JobReads.NextDue(c);
     }
 
     public QueueStatus Status()
     {
         using var c = database.Open();
-        using var q = Query(c, JobSql.Status);
-        using var r = q.ExecuteReader();
-        r.Read();
-        return new QueueStatus(r.Long(0), r.Long(1), r.NullableLong(2) is { } oldest ? time.GetUtcNow() - DateTimeOffset.FromUnixTimeMilliseconds(oldest) : null);
+        return JobReads.Status(c, time.GetUtcNow());
     }
 
     public Task<long> PruneAsync(TimeSpan retention, CancellationToken cancellationToken)
@@ -115,13 +100,6 @@ public sealed class SqliteJobStore(SqliteDatabase database, TimeProvider time, J
         }, cancellationToken);
 
     private long Now() => time.GetUtcNow().ToUnixTimeMilliseconds();
-
-    private static SqliteCommand Query(SqliteConnection c, string sql)
-    {
-        var command = c.CreateCommand();
-        command.CommandText = sql;
-        return command;
-    }
 
     private static SqliteCommand Command(SqliteConnection c, SqliteTransaction t, string sql)
     {

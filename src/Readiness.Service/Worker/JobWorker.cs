@@ -1,4 +1,5 @@
 using Readiness.Service.Configuration;
+using Readiness.Service.Forge;
 using Readiness.Service.Storage;
 
 namespace Readiness.Service.Worker;
@@ -75,6 +76,14 @@ public sealed class JobWorker(
 
     private async Task RunAsync(Job job, string owner, CancellationToken stoppingToken)
     {
+        // Every line logged for this job, here and in the processor, forge and mirror code it calls, carries these.
+        using var scope = logger.BeginScope(new Dictionary<string, object>
+        {
+            ["DeliveryId"] = job.DeliveryId,
+            ["JobId"] = job.Id,
+            ["Repository"] = job.Request.Repository,
+            ["PullRequest"] = job.Request.Number,
+        });
         using var jobCancel = CancellationTokenSource.CreateLinkedTokenSource(stoppingToken);
         using var renewing = new CancellationTokenSource();
         var renewal = RenewAsync(job.Id, owner, jobCancel, renewing.Token);
@@ -98,6 +107,14 @@ public sealed class JobWorker(
             await renewal.ConfigureAwait(false);
             await jobs.RequeueAsync(job.Id, owner, TimeSpan.Zero, null, CancellationToken.None).ConfigureAwait(false);
             logger.LogInformation("Job {Job} returned to the queue at shutdown", job.Id);
+        }
+        catch (ForgeRateLimitedException e)
+        {
+            await renewing.CancelAsync().ConfigureAwait(false);
+            await renewal.ConfigureAwait(false);
+            var wait = e.Until - time.GetUtcNow();
+            await jobs.RequeueAsync(job.Id, owner, wait > TimeSpan.Zero ? wait : TimeSpan.Zero, e.Message, CancellationToken.None, countAttempt: false).ConfigureAwait(false);
+            logger.LogWarning("Job {Job} waits for the forge's rate limit until {Until:u}", job.Id, e.Until);
         }
         catch (OperationCanceledException) when (jobCancel.IsCancellationRequested)
         {

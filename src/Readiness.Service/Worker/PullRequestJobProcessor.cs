@@ -35,6 +35,10 @@ public sealed class PullRequestJobProcessor(
     /// <summary>The hidden first line of the report comment, by which it is found again.</summary>
     public const string CommentMarker = "<!-- readiness-report -->";
 
+    /// <summary>Said under every report: a tick anywhere else (a comment, this comment) confirms nothing.</summary>
+    public const string ConfirmationNote =
+        "Only ticks in the pull request's description count as confirmations of manual items; ticks in comments, this one included, are not read.";
+
     /// <summary>The commit status's context.</summary>
     public const string StatusContext = "readiness";
 
@@ -198,7 +202,7 @@ public sealed class PullRequestJobProcessor(
             body = $"{CommentMarker}\n## ⚠️ Readiness could not run\n\n```text\n{message}\n```\n";
         }
 
-        return body.TrimEnd() + $"\n\n[Full report]({link}) · commit `{run.Commit[..12]}`\n";
+        return body.TrimEnd() + $"\n\n{ConfirmationNote}\n\n[Full report]({link}) · commit `{run.Commit[..12]}`\n";
     }
 
     private static ForgeCommitStatus Status(RunRecord run, string sha, string link) => new(

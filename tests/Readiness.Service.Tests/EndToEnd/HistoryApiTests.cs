@@ -70,6 +70,23 @@ public sealed class HistoryApiTests : ServiceTestBase
         Assert.Equal(HttpStatusCode.NotFound, (await Host.GetAsync("/runs/99.md")).StatusCode);
     }
 
+    [Fact]
+    public async Task UnknownRoute_GetsASmallHtmlPage_AndApiRoutesJson()
+    {
+        var page = await Host.GetAsync("/no/such/page?x=<b>");
+        Assert.Equal(HttpStatusCode.NotFound, page.StatusCode);
+        Assert.Equal("text/html", page.Content.Headers.ContentType?.MediaType);
+        var html = await page.Content.ReadAsStringAsync();
+        Assert.Contains("<h1>Not found</h1>", html, StringComparison.Ordinal);
+        Assert.Contains("href=\"/\"", html, StringComparison.Ordinal);
+        Assert.DoesNotContain("<b>", html, StringComparison.Ordinal);
+        Assert.True(page.Headers.Contains("Content-Security-Policy"));
+
+        var api = await Host.GetAsync("/api/nothing");
+        Assert.Equal(HttpStatusCode.NotFound, api.StatusCode);
+        Assert.Equal("application/json", api.Content.Headers.ContentType?.MediaType);
+    }
+
     private async Task<string> ReportJsonAsync()
     {
         await Host.DeliverAsync(Repo.Payload("opened", 1, Repo.Work.Sha(ReleasePullRequestRepository.PullRequestBranch)), "delivery-1");

@@ -23,6 +23,7 @@ public sealed class PullRequestFlowTests : ServiceTestBase
         Assert.Equal(1, comment.Number);
         Assert.StartsWith(Marker, comment.Body, StringComparison.Ordinal);
         Assert.Contains("http://127.0.0.1:5080/runs/1", comment.Body, StringComparison.Ordinal);
+        Assert.Contains("Only ticks in the pull request's description count as confirmations", comment.Body, StringComparison.Ordinal);
         var status = Assert.Single(Forge.Statuses());
         Assert.Equal(head, status.Sha);
         Assert.Equal(PullRequestJobProcessor.StatusContext, status.Context);

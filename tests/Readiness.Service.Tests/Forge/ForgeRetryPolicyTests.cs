@@ -23,6 +23,15 @@ public sealed class ForgeRetryPolicyTests
     }
 
     [Fact]
+    public void ForbiddenWithoutRateLimitHeaders_IsTheSecondaryLimit_WaitsAtLeastAMinute()
+    {
+        // The forge's rate-limit docs (standards.md §8): for the secondary limit without retry-after or reset, wait
+        // at least one minute, backing off exponentially.
+        Assert.Equal(TimeSpan.FromMinutes(1), ForgeRetryPolicy.DelayFor(HttpStatusCode.Forbidden, Headers(), 0, Now));
+        Assert.Equal(TimeSpan.FromMinutes(4), ForgeRetryPolicy.DelayFor(HttpStatusCode.Forbidden, Headers(), 2, Now));
+    }
+
+    [Fact]
     public void ServerError_BacksOffExponentially()
     {
         Assert.Equal(TimeSpan.FromSeconds(1), ForgeRetryPolicy.DelayFor(HttpStatusCode.BadGateway, Headers(), 0, Now));

@@ -89,6 +89,21 @@ public sealed class OctokitForgeTests : IAsyncLifetime
     }
 
     [Fact]
+    public async Task HungCall_IsCancelledAfterItsTimeout_AndRetried()
+    {
+        var (reached, _) = standIn.Hold("POST", "/statuses/");
+        var retry = new ForgeRetryPolicy(2, TimeSpan.FromMilliseconds(20), TimeProvider.System, NullLogger<ForgeRetryPolicy>.Instance, callTimeout: TimeSpan.FromMilliseconds(500));
+        var forge = new OctokitForge(connections, new PlainTokenCredentials("forge-token-Xq81"), retry);
+        var sha = new string('d', 40);
+        var started = System.Diagnostics.Stopwatch.StartNew();
+        await forge.SetStatusAsync(Pr.Repository, new ForgeCommitStatus(sha, ForgeCommitState.Success, "Ready", null, "readiness"), default);
+        Assert.True(reached.IsCompleted);
+        Assert.Equal(1, retry.Retries);
+        Assert.InRange(started.Elapsed, TimeSpan.FromMilliseconds(400), TimeSpan.FromSeconds(20));
+        Assert.Equal("success", Assert.Single(standIn.Statuses(sha)).State);
+    }
+
+    [Fact]
     public async Task LongDescription_IsShortenedToWhatTheForgeAccepts()
     {
         var sha = new string('c', 40);

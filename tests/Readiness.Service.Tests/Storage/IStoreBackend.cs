@@ -8,4 +8,7 @@ public interface IStoreBackend : IDisposable
     IJobStore Jobs(TimeProvider time, JobStoreOptions? options = null);
 
     IRunStore Runs(TimeProvider time);
+
+    /// <summary>A rate-limit store on the same database, as another instance would open it.</summary>
+    IForgeLimitStore Limits();
 }

@@ -232,6 +232,19 @@ public abstract class JobStoreContract : IDisposable
     }
 
     [Fact]
+    public async Task RateLimit_RecordedByOneInstance_IsSeenByAnother_AndALaterOneStays()
+    {
+        var one = backend.Limits();
+        var other = backend.Limits();
+        var until = time.GetUtcNow().AddMinutes(2);
+        Assert.Null(await other.BlockedUntilAsync("installation:42", default));
+        await one.BlockAsync("installation:42", until, default);
+        await other.BlockAsync("installation:42", until.AddMinutes(-1), default);
+        Assert.Equal(until, await other.BlockedUntilAsync("installation:42", default));
+        Assert.Null(await one.BlockedUntilAsync("token", default));
+    }
+
+    [Fact]
     public async Task ManyConcurrentDeliveries_EachRecordedOnce()
     {
         // 200 deliveries, each sent twice at the same time, for 10 pull requests.

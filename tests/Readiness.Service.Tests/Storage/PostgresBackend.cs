@@ -14,6 +14,8 @@ public sealed class PostgresBackend : IStoreBackend
         Database.Initialize();
     }
 
+    private readonly List<PostgresDatabase> others = [];
+
     public string ConnectionString { get; }
 
     public PostgresDatabase Database { get; }
@@ -22,5 +24,16 @@ public sealed class PostgresBackend : IStoreBackend
 
     public IRunStore Runs(TimeProvider time) => new PostgresRunStore(Database, time);
 
-    public void Dispose() => Database.Dispose();
+    public IForgeLimitStore Limits()
+    {
+        var other = new PostgresDatabase(ConnectionString);
+        others.Add(other);
+        return new PostgresForgeLimitStore(other);
+    }
+
+    public void Dispose()
+    {
+        Database.Dispose();
+        others.ForEach(d => d.Dispose());
+    }
 }

@@ -20,6 +20,8 @@ public sealed class SqliteBackend : IStoreBackend
 
     public IRunStore Runs(TimeProvider time) => new SqliteRunStore(Database, time);
 
+    public IForgeLimitStore Limits() => new SqliteForgeLimitStore(Database);
+
     public void Dispose()
     {
         Database.Dispose();

@@ -35,6 +35,12 @@ public sealed class ChangelogHasEntryCheck : ICheck
     public IEnumerable<Finding> Run(CheckContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
+        if (ChangelogFiles.InForgeReleases(context) is { } elsewhere)
+        {
+            yield return elsewhere;
+            yield break;
+        }
+
         foreach (var target in ChangelogFiles.Resolve(context))
         {
             var (input, instead) = ChangelogInput.Open(context, target);
@@ -88,9 +94,11 @@ public sealed class ChangelogHasEntryCheck : ICheck
 
         if (section.Date is not { } date)
         {
-            problems.Add(section.DateText is null
-                ? "it has no date (Keep a Changelog dates every release YYYY-MM-DD)"
-                : $"its date '{section.DateText}' is not an ISO date YYYY-MM-DD");
+            // An undated heading still is this release's entry: a warning in the message, not a missing entry.
+            if (section.DateText is not null)
+            {
+                problems.Add($"its date '{section.DateText}' is not an ISO date YYYY-MM-DD");
+            }
         }
         else if (date > releaseDate)
         {
@@ -112,6 +120,11 @@ public sealed class ChangelogHasEntryCheck : ICheck
         }
 
         var notes = new List<string>();
+        if (section.Date is null)
+        {
+            notes.Add("warning: the heading has no date (Keep a Changelog dates every release YYYY-MM-DD)");
+        }
+
         var written = section.VersionText!.TrimStart('v', 'V');
         if (!string.Equals(written, input.Version.ToNormalizedString(), StringComparison.Ordinal)
             && !string.Equals(written, input.VersionText, StringComparison.Ordinal))
@@ -127,8 +140,8 @@ public sealed class ChangelogHasEntryCheck : ICheck
         var types = section.ChangeTypes.Count > 0 ? $" ({string.Join(", ", section.ChangeTypes)})" : string.Empty;
         var note = notes.Count > 0 ? $" Note: {string.Join("; ", notes)}." : string.Empty;
         return Finding.Pass(
-            $"{where}: '## {section.Heading}' has {Count(entries, "entry", "entries")}{types}, dated {Iso(section.Date!.Value)}, "
-            + $"not after {dateName} ({Iso(releaseDate)}).{note}",
+            $"{where}: '## {section.Heading}' has {Count(entries, "entry", "entries")}{types}"
+            + (section.Date is { } dated ? $", dated {Iso(dated)}, not after {dateName} ({Iso(releaseDate)})." : ".") + note,
             package,
             new Evidence(path, section.Line));
     }

@@ -44,6 +44,11 @@ internal sealed record ChangelogInput(ChangelogTarget Target, string Path, strin
             return (null, Finding.Skip($"{path} could not be read at the inspected commit.", target.Package, new Evidence(path)));
         }
 
+        if (!path.EndsWith(".md", StringComparison.OrdinalIgnoreCase) && !path.EndsWith(".markdown", StringComparison.OrdinalIgnoreCase))
+        {
+            text = ChangelogParser.PlainTextAsMarkdown(text);
+        }
+
         if (!ChangelogParser.TryParse(text, out var document, out var error))
         {
             return (null, Finding.Error($"{path}: {error}", target.Package, new Evidence(path)));

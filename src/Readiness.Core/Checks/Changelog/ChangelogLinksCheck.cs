@@ -30,6 +30,12 @@ public sealed class ChangelogLinksCheck : ICheck
     public IEnumerable<Finding> Run(CheckContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
+        if (ChangelogFiles.InForgeReleases(context) is { } elsewhere)
+        {
+            yield return elsewhere;
+            yield break;
+        }
+
         foreach (var target in ChangelogFiles.Resolve(context))
         {
             var (input, instead) = ChangelogInput.Open(context, target);

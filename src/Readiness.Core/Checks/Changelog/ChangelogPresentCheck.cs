@@ -25,6 +25,12 @@ public sealed class ChangelogPresentCheck : ICheck
     public IEnumerable<Finding> Run(CheckContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
+        if (ChangelogFiles.InForgeReleases(context) is { } elsewhere)
+        {
+            yield return elsewhere;
+            yield break;
+        }
+
         foreach (var target in ChangelogFiles.Resolve(context))
         {
             if (target.Path is { } path)

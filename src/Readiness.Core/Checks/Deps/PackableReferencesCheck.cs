@@ -49,6 +49,16 @@ public sealed class PackableReferencesCheck : ICheck
                 new Evidence(at.Path, at.Line));
         }
 
+        if (project.SuppressesDependencies)
+        {
+            // NuGet pack target inputs: SuppressDependenciesWhenPacking leaves the dependency group out entirely.
+            var at = project.Property("SuppressDependenciesWhenPacking")!.Location;
+            return Finding.Pass(
+                $"{project.PackageId} sets SuppressDependenciesWhenPacking at {at}: its project references become no dependencies.",
+                project.PackageId,
+                new Evidence(at.Path, at.Line));
+        }
+
         var problems = new List<string>();
         var evidence = new List<Evidence>();
         var fine = new List<string>();
@@ -61,16 +71,25 @@ public sealed class PackableReferencesCheck : ICheck
                 continue;
             }
 
+            if (string.Equals(ReferenceAssets.Find(reference.Metadata, "ReferenceOutputAssembly")?.Trim(), "false", StringComparison.OrdinalIgnoreCase))
+            {
+                // An analyzer or source generator referenced for the build only: NuGet pack writes no dependency
+                // for a ProjectReference with ReferenceOutputAssembly=false (NuGet/Home#10312).
+                fine.Add($"{reference.Path} (ReferenceOutputAssembly=false)");
+                continue;
+            }
+
             var target = model.Find(reference.Path);
             if (target is null)
             {
                 problems.Add($"{reference.Path} ({reference.Location}) is not an SDK-style project at this commit");
                 evidence.Add(at);
             }
-            else if (!target.IsPackable)
+            else if (!model.IsReleased(target))
             {
                 evidence.Add(at);
-                var why = target.IsTestProject ? "a test project" : "not packable";
+                var decided = model.Decisions?.FirstOrDefault(d => d.Path == target.Path)?.Reason;
+                var why = target.IsTestProject ? "a test project" : decided is null ? "not packable" : $"not released ({decided})";
                 if (target.Property("IsPackable") is { } p && !target.IsTestProject)
                 {
                     why = $"not packable (IsPackable={p.Value} at {p.Location})";

@@ -64,7 +64,7 @@ internal static class RegistrySubjects
         var release = context.Release;
         var evidence = new Evidence(project.Path);
         string? text;
-        if (release.VersionSource == "--version")
+        if (release.VersionSource == ReleaseFacts.VersionOptionSource)
         {
             text = release.Version;
         }
@@ -81,6 +81,13 @@ internal static class RegistrySubjects
         else
         {
             var declared = DeclaredVersion.Of(project);
+            if (VersionSourceDetector.ExternalSource(project, context.Snapshot.Files, declared) is { } external)
+            {
+                // Never the SDK default or a placeholder: the registry is asked about the version the release will have.
+                return (null, null, Finding.Skip(
+                    $"The release's version is not known before it is tagged ({external}); pass --version or --tag.", project.PackageId, evidence));
+            }
+
             if (declared.Unevaluated is { } why)
             {
                 return (null, null, Finding.Skip($"{declared.Property} could not be evaluated statically: {why}.", project.PackageId, evidence));
@@ -108,7 +115,9 @@ internal static class RegistrySubjects
     /// version.
     /// </summary>
     public static IEnumerable<PackageReferenceItem> DeclaredDependencies(ProjectInfo project) =>
-        project.PackageReferences
+        project.SuppressesDependencies
+            ? []
+            : project.PackageReferences
             .Where(r => !IsAll(r.Meta("PrivateAssets")) && !IsNone(r.Meta("IncludeAssets")))
             .DistinctBy(r => (r.Id.ToUpperInvariant(), r.Version));
 

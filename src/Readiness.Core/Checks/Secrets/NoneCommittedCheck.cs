@@ -24,14 +24,39 @@ public sealed class NoneCommittedCheck : ICheck
         Standards.NuGetConfig,
         "Anything committed reaches every clone, fork and mirror, and stays in history. A key or token in a public "
         + "repository is found by automated scanners within minutes.",
-        Advice);
+        Advice)
+    {
+        Settings = [PrivateStrongNameKey],
+    };
+
+    /// <summary>Set true when the repository's strong-name key must stay private (it then blocks like any key).</summary>
+    public const string PrivateStrongNameKey = "strong-name-key-private";
 
     public IEnumerable<Finding> Run(CheckContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
-        var result = SecretScanner.Scan(context.Snapshot.Files);
-        var extra = Notes(result);
-        var scanned = $"{result.TextFiles + result.BinaryFiles} tracked files ({result.TextFiles} scanned as text, {result.BinaryFiles} binary checked by name and format)";
+        var scan = SecretScanner.Scan(context.Snapshot.Files);
+        var extra = Notes(scan);
+        var scanned = $"{scan.TextFiles + scan.BinaryFiles} tracked files ({scan.TextFiles} scanned as text, {scan.BinaryFiles} binary checked by name and format)";
+        var result = scan;
+        if (!context.Parameters.Bool(PrivateStrongNameKey))
+        {
+            // .NET library guidance (strong naming) recommends committing the key pair of an open-source library so
+            // that anyone can build it: it identifies, it does not secure. Information, unless configured private.
+            var keys = scan.Hits.Where(h => h.Kind == KeyFiles.StrongNameKeyPair).ToList();
+            foreach (var key in keys)
+            {
+                yield return Finding.Pass(
+                    $"{key.Path} is a strong-name key pair: committing it is documented practice for open-source libraries "
+                    + $"(.NET library guidance, strong naming), so it is reported, not judged as a secret; set {PrivateStrongNameKey}: true "
+                    + "if your organisation's security policy keeps it private.",
+                    null,
+                    new Evidence(key.Path));
+            }
+
+            result = scan with { Hits = scan.Hits.Except(keys).ToList() };
+        }
+
         if (result.Hits.Count == 0)
         {
             // A file that could not be scanned may hold anything: the check cannot pass on it.

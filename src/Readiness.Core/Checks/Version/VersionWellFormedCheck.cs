@@ -28,7 +28,7 @@ public sealed class VersionWellFormedCheck : ICheck
         {
             yield return Judge(tagVersion, $"tag {context.Release.Tag!.Name}", null, allowFour, null);
         }
-        else if (context.Release.VersionSource == "--version" && context.Release.Version is { } given)
+        else if (context.Release.VersionSource == ReleaseFacts.VersionOptionSource && context.Release.Version is { } given)
         {
             yield return Judge(given, "--version", null, allowFour, null);
         }
@@ -37,7 +37,12 @@ public sealed class VersionWellFormedCheck : ICheck
         {
             var declared = DeclaredVersion.Of(project);
             var evidence = declared.Location is { } l ? new Evidence(l.Path, l.Line) : new Evidence(project.Path);
-            if (declared.Value is null)
+            if (VersionSourceDetector.ExternalSource(project, context.Snapshot.Files, declared) is { } external)
+            {
+                // The package gets the release's version, judged above, never the SDK default or a placeholder.
+                yield return Finding.Pass($"Not judged on its own: {external}; the release's version is judged instead.", project.PackageId, evidence);
+            }
+            else if (declared.Value is null)
             {
                 yield return Finding.Skip("No version declared (the SDK would use 1.0.0).", project.PackageId, evidence);
             }

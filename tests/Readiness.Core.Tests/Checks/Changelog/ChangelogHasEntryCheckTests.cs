@@ -82,8 +82,17 @@ public sealed class ChangelogHasEntryCheckTests
         Assert.Equal(CheckStatus.Fail, inUtc.Status);
     }
 
+    [Fact]
+    public void UndatedHeading_IsTheEntry_WithAWarning()
+    {
+        // Keep a Changelog 1.1.0 dates every release; a heading without one is still this version's entry.
+        var finding = Assert.Single(check.Run(Context(Tree(ChangelogSamples.With("## [2.4.0]")))));
+
+        Assert.Equal(CheckStatus.Pass, finding.Status);
+        Assert.Contains("warning: the heading has no date", finding.Message, StringComparison.Ordinal);
+    }
+
     [Theory]
-    [InlineData("## [2.4.0]", "has no date")]
     [InlineData("## [2.4.0] - 20/11/2026", "its date '20/11/2026' is not an ISO date YYYY-MM-DD")]
     [InlineData("## [2.4.0] - 2026-11-31", "its date '2026-11-31' is not an ISO date YYYY-MM-DD")]
     public void MissingOrMalformedDate_Fails(string heading, string expected)

@@ -30,12 +30,12 @@ public sealed class ChangelogPresentCheckTests
     [Fact]
     public void NoChangelog_Fails()
     {
-        var files = new InMemoryFileTree().Add("README.md", "# Bramble.Sketches\n").Add("docs/CHANGELOG.txt", "old\n");
+        var files = new InMemoryFileTree().Add("README.md", "# Bramble.Sketches\n").Add("docs/old/CHANGELOG.txt", "old\n");
 
         var finding = Assert.Single(check.Run(Context(files)));
 
         Assert.Equal(CheckStatus.Fail, finding.Status);
-        Assert.Contains("CHANGELOG.md", finding.Message, StringComparison.Ordinal);
+        Assert.Contains("CHANGELOG, CHANGES", finding.Message, StringComparison.Ordinal);
         Assert.NotNull(finding.Hint);
     }
 

@@ -98,4 +98,19 @@ public sealed class NoneCommittedCheckTests
         Assert.Equal(CheckStatus.Fail, finding.Status);
         Assert.DoesNotContain("s3cr3t-value", finding.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void StrongNameKeyPair_IsInformation_UnlessConfiguredPrivate()
+    {
+        // .NET library guidance (strong naming): an open-source library should commit its .snk so anyone can build it.
+        // The key pair's format (PRIVATEKEYBLOB, "RSA2") is confirmed against .NET's own ExportCspBlob in SecretScannerTests.
+        var files = new InMemoryFileTree().Add("README.md", "# Bramble.Sketches\n").Add("signing/Bramble.snk", SecretFixtures.SnkKeyPair());
+
+        var open = Run(new NoneCommittedCheck(), files: files);
+        Assert.DoesNotContain(open, f => f.Status == CheckStatus.Fail);
+        Assert.Contains(open, f => f.Status == CheckStatus.Pass && f.Message.StartsWith("signing/Bramble.snk is a strong-name key pair", StringComparison.Ordinal));
+
+        var kept = Run(new NoneCommittedCheck(), files: files, with: "strong-name-key-private: true\n");
+        Assert.Contains(kept, f => f.Status == CheckStatus.Fail && EvidenceText(f).SequenceEqual(["signing/Bramble.snk"]));
+    }
 }
