@@ -251,7 +251,12 @@ public sealed class HookTests : IDisposable
 
         // No recorded command and no `readiness` on PATH: the shell hook would stop every release push.
         repo.Git("config", "--unset", "readiness.command");
-        var env = new Dictionary<string, string> { ["PATH"] = scratch.Combine("empty-path") };
+        // A PATH that holds git (the program needs it) but no readiness.
+        var onlyGit = scratch.Combine("only-git");
+        Directory.CreateDirectory(onlyGit);
+        var git = Hooks.HookInstaller.CommandOnPath("git") ?? throw new InvalidOperationException("git is not on PATH");
+        File.CreateSymbolicLink(Path.Combine(onlyGit, "git"), git);
+        var env = new Dictionary<string, string> { ["PATH"] = onlyGit };
         var (pathExit, pathOut, _) = await CliHarness.RunWithInputAsync(repo.Path, string.Empty, env, "hook", "status");
         Assert.Equal(1, pathExit);
         Assert.Contains("not on PATH", pathOut, StringComparison.Ordinal);
