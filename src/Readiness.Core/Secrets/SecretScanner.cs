@@ -108,26 +108,13 @@ public static class SecretScanner
     public static IEnumerable<string> MatchedValues(string content)
     {
         ArgumentNullException.ThrowIfNull(content);
-        foreach (var shape in SecretShapes.All)
+        foreach (var (_, match) in Matches(content))
         {
-            if (!shape.Prefixes.Any(p => content.Contains(p, StringComparison.Ordinal)))
+            yield return match.Value;
+            var body = match.Groups["body"];
+            if (body.Success && body.Length >= 16)
             {
-                continue;
-            }
-
-            foreach (var match in shape.Pattern.Matches(content).Cast<System.Text.RegularExpressions.Match>())
-            {
-                var body = match.Groups["body"];
-                if (body.Success && shape.Id != "private-key" && !SecretShape.LooksRandom(body.Value))
-                {
-                    continue;
-                }
-
-                yield return match.Value;
-                if (body.Success && body.Length >= 16)
-                {
-                    yield return body.Value;
-                }
+                yield return body.Value;
             }
         }
     }
@@ -136,6 +123,16 @@ public static class SecretScanner
     public static IEnumerable<SecretHit> ScanText(string path, string content)
     {
         ArgumentNullException.ThrowIfNull(content);
+        foreach (var (shape, match) in Matches(content))
+        {
+            var line = content.AsSpan(0, match.Index).Count('\n') + 1;
+            yield return new SecretHit(path, line, shape.Name, shape.Source);
+        }
+    }
+
+    /// <summary>Each shape's matches whose body looks random (a private key block always counts): placeholders are left out.</summary>
+    private static IEnumerable<(SecretShape Shape, System.Text.RegularExpressions.Match Match)> Matches(string content)
+    {
         foreach (var shape in SecretShapes.All)
         {
             if (!shape.Prefixes.Any(p => content.Contains(p, StringComparison.Ordinal)))
@@ -146,13 +143,10 @@ public static class SecretScanner
             foreach (var match in shape.Pattern.Matches(content).Cast<System.Text.RegularExpressions.Match>())
             {
                 var body = match.Groups["body"];
-                if (body.Success && shape.Id != "private-key" && !SecretShape.LooksRandom(body.Value))
+                if (!body.Success || shape.Id == "private-key" || SecretShape.LooksRandom(body.Value))
                 {
-                    continue;
+                    yield return (shape, match);
                 }
-
-                var line = content.AsSpan(0, match.Index).Count('\n') + 1;
-                yield return new SecretHit(path, line, shape.Name, shape.Source);
             }
         }
     }
