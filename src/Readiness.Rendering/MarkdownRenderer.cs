@@ -199,9 +199,8 @@ public sealed class MarkdownRenderer : IReportRenderer
     }
 
     /// <summary>
-    /// GitHub's heading anchors, which Markdig's <c>AutoIdentifierOptions.GitHub</c> reproduces for the HTML page:
-    /// lower case, letters, digits, '-' and '_' kept, spaces to '-', everything else dropped, repeats numbered
-    /// <c>-1</c>, <c>-2</c> (from memory of GitHub's rendering; the HTML tests hold it to Markdig's ids).
+    /// GitHub's heading anchors as Markdig makes them for the HTML page (<c>LinkHelper.UrilizeAsGfm</c>, the same
+    /// function its <c>AutoIdentifierOptions.GitHub</c> uses), repeats numbered <c>-1</c>, <c>-2</c>.
     /// </summary>
     private sealed class AnchorNames
     {
@@ -209,20 +208,7 @@ public sealed class MarkdownRenderer : IReportRenderer
 
         public string Next(string heading)
         {
-            var slug = new StringBuilder(heading.Length);
-            foreach (var c in heading.ToLowerInvariant())
-            {
-                if (char.IsLetterOrDigit(c) || c is '-' or '_')
-                {
-                    slug.Append(c);
-                }
-                else if (c == ' ')
-                {
-                    slug.Append('-');
-                }
-            }
-
-            var name = slug.ToString();
+            var name = Markdig.Helpers.LinkHelper.UrilizeAsGfm(heading);
             if (seen.TryGetValue(name, out var count))
             {
                 seen[name] = count + 1;
